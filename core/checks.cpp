@@ -1,0 +1,35 @@
+// Argument checks shared by the engine (see checks.h).
+#include "core/checks.h"
+
+#include <cmath>
+#include <string>
+
+#include "core/errors.h"
+
+namespace tenure {
+
+void require_finite(double value, std::string_view where) {
+  if (!std::isfinite(value)) throw InputError(std::string(where), "must be a finite number");
+}
+
+void require_non_negative(double value, std::string_view where) {
+  require_finite(value, where);
+  if (value < 0) throw InputError(std::string(where), "must be >= 0");
+}
+
+void require_positive(double value, std::string_view where) {
+  require_finite(value, where);
+  if (value <= 0) throw InputError(std::string(where), "must be > 0");
+}
+
+void require_rate(Rate value, std::string_view where) {
+  require_finite(value, where);
+  if (value <= -1) throw InputError(std::string(where), "must be a rate greater than -1");
+}
+
+void require_tax_rate(Rate value, std::string_view where) {
+  require_finite(value, where);
+  if (value < 0 || value >= 1) throw InputError(std::string(where), "must be in [0, 1)");
+}
+
+}  // namespace tenure

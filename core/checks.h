@@ -1,0 +1,21 @@
+// Argument checks shared by the engine. Each throws InputError naming `where` and the rule.
+//
+//   require_finite(x, "$.marr");              // rejects NaN and infinities
+//   require_rate(i, "i");                     // finite and > -1
+#pragma once
+
+#include <string_view>
+
+#include "core/types.h"
+
+namespace tenure {
+
+void require_finite(double value, std::string_view where);
+void require_non_negative(double value, std::string_view where);
+void require_positive(double value, std::string_view where);
+// An interest rate: finite and greater than -1 (so 1 + i > 0).
+void require_rate(Rate value, std::string_view where);
+// A tax rate: 0 <= t < 1.
+void require_tax_rate(Rate value, std::string_view where);
+
+}  // namespace tenure

@@ -1,0 +1,63 @@
+// A depreciation method is a strategy: given a basis it yields the full-year deductions of years
+// 1..n and says what fraction of a year's deduction is taken in the year of disposal. Schedule
+// (schedule.h) applies one method to one basis and answers book-value questions.
+//
+// Adding a method is one new file: a class deriving from Method, plus its line in make_method
+// (factory.cpp) and in the case-file reader's method table (formats/depreciation_json.cpp).
+//
+//   auto sl = tenure::depreciation::make_method(tenure::depreciation::StraightLineSpec{5, 1000});
+//   sl->deductions(11000);   // {2000, 2000, 2000, 2000, 2000}
+#pragma once
+
+#include <memory>
+#include <string_view>
+#include <variant>
+#include <vector>
+
+#include "core/types.h"
+
+namespace tenure::depreciation {
+
+class Method {
+ public:
+  virtual ~Method() = default;
+  // The method's name as written in case files: "straight_line", "macrs", ...
+  virtual std::string_view name() const = 0;
+  // Full-year deductions for years 1..n on `basis`; years after the last one deduct nothing.
+  virtual std::vector<Money> deductions(Money basis) const = 0;
+  // Fraction of year `year`'s full deduction taken when the asset is sold at the end of that
+  // year. Book methods take the full year (1.0); MACRS takes half before its last table year.
+  virtual double disposal_year_fraction(Years year) const {
+    (void)year;
+    return 1.0;
+  }
+};
+
+// Parameters of each method, as in a case file's depreciation object (SPEC 5). Each method's
+// constructor validates them and throws InputError naming the field ("life_years", ...).
+struct StraightLineSpec {
+  Years life_years;
+  Money salvage;
+};
+struct DecliningBalanceSpec {
+  Years life_years;
+  double rate;  // multiple of the straight-line rate: 2.0 is double declining balance
+  Money salvage;
+  bool switch_to_straight_line;
+};
+struct SumOfYearsDigitsSpec {
+  Years life_years;
+  Money salvage;
+};
+struct MacrsSpec {
+  Years recovery_years;  // 3, 5, 7, 10, 15 or 20 (GDS, half-year convention)
+};
+struct NoDepreciationSpec {};
+
+using Spec = std::variant<StraightLineSpec, DecliningBalanceSpec, SumOfYearsDigitsSpec, MacrsSpec,
+                          NoDepreciationSpec>;
+
+// Builds the method a spec describes; throws InputError for out-of-range parameters.
+std::shared_ptr<const Method> make_method(const Spec& spec);
+
+}  // namespace tenure::depreciation

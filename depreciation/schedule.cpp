@@ -1,0 +1,48 @@
+// Schedule (see schedule.h). Everything is computed once in the constructor, so each query is a
+// lookup.
+#include "depreciation/schedule.h"
+
+#include <algorithm>
+
+#include "core/checks.h"
+#include "core/errors.h"
+
+namespace tenure::depreciation {
+
+Schedule::Schedule(const Method& method, Money basis) : basis_(basis) {
+  require_positive(basis_, "basis");
+  deductions_ = method.deductions(basis_);
+  disposal_fractions_.reserve(deductions_.size());
+  book_values_.reserve(deductions_.size() + 1);
+  book_values_.push_back(basis_);
+  Money deducted = 0;
+  for (std::size_t k = 0; k < deductions_.size(); ++k) {
+    disposal_fractions_.push_back(method.disposal_year_fraction(static_cast<Years>(k + 1)));
+    deducted += deductions_[k];
+    book_values_.push_back(basis_ - deducted);
+  }
+}
+
+Money Schedule::deduction(Years year) const {
+  if (year < 1 || year > years()) return 0;
+  return deductions_[static_cast<std::size_t>(year - 1)];
+}
+
+Money Schedule::book_value(Years year) const {
+  if (year < 0) throw InputError("year", "must be >= 0");
+  return book_values_[static_cast<std::size_t>(std::min(year, years()))];
+}
+
+Money Schedule::deduction_if_sold(Years year) const {
+  if (year < 1 || year > years()) return 0;
+  const auto index = static_cast<std::size_t>(year - 1);
+  return deductions_[index] * disposal_fractions_[index];
+}
+
+Money Schedule::book_value_if_sold(Years year) const {
+  if (year < 0) throw InputError("year", "must be >= 0");
+  if (year == 0) return basis_;
+  return book_value(year - 1) - deduction_if_sold(year);
+}
+
+}  // namespace tenure::depreciation

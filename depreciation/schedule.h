@@ -1,0 +1,41 @@
+// One depreciation method applied to one basis: deductions, book values and the disposal-year
+// rule, year by year. Years are 1-based; year 0's book value is the basis.
+//
+//   Schedule s(*make_method(MacrsSpec{5}), 10000);
+//   s.deduction(2);             // 3200 (32.00% of basis, Pub 946 Table A-1)
+//   s.book_value(2);            // 4800
+//   s.deduction_if_sold(3);     // 960: half of year 3's 1920, MACRS disposal-year rule
+//   s.book_value_if_sold(3);    // 3840
+#pragma once
+
+#include <vector>
+
+#include "core/types.h"
+#include "depreciation/method.h"
+
+namespace tenure::depreciation {
+
+class Schedule {
+ public:
+  Schedule(const Method& method, Money basis);
+
+  Money basis() const { return basis_; }
+  // Years with a deduction (the schedule's length); later years deduct nothing.
+  Years years() const { return static_cast<Years>(deductions_.size()); }
+  // Full-year deduction of `year` (0 outside 1..years()).
+  Money deduction(Years year) const;
+  // Book value at the end of `year` after full-year deductions; book_value(0) is the basis.
+  Money book_value(Years year) const;
+  // Deduction taken in `year` when the asset is sold at its end (the disposal-year rule).
+  Money deduction_if_sold(Years year) const;
+  // Book value at a sale at the end of `year`: book_value(year - 1) - deduction_if_sold(year).
+  Money book_value_if_sold(Years year) const;
+
+ private:
+  Money basis_;
+  std::vector<Money> deductions_;
+  std::vector<double> disposal_fractions_;  // per schedule year
+  std::vector<Money> book_values_;          // index = year, 0..years()
+};
+
+}  // namespace tenure::depreciation

@@ -1,0 +1,101 @@
+// One whole replacement analysis: both assets on both bases, the decision, the study period
+// (see case_analysis.h).
+#include "replacement/case_analysis.h"
+
+#include <fmt/format.h>
+
+#include "core/errors.h"
+
+namespace tenure::replacement {
+
+const BasisAnalysis& AssetAnalysis::on(Basis basis) const {
+  return basis == Basis::after_tax && after_tax ? *after_tax : before_tax;
+}
+
+AssetAnalysis analyse_asset(const Ownership& asset, const tax::Rates& rates) {
+  KeepingCosts before = before_tax_keeping_costs(asset, rates.marr);
+  LifeCurve before_curve = life_curve(before);
+  AssetAnalysis result{{std::move(before), std::move(before_curve)}, std::nullopt,
+                       after_tax_table(asset, rates)};
+  if (rates.after_tax()) {
+    KeepingCosts after = after_tax_keeping_costs(asset, rates);
+    LifeCurve after_curve = life_curve(after);
+    result.after_tax = BasisAnalysis{std::move(after), std::move(after_curve)};
+  }
+  return result;
+}
+
+namespace {
+
+std::string money(Money amount) { return fmt::format("{:.2f}", amount); }
+
+std::string years(Years n) { return fmt::format("{} year{}", n, n == 1 ? "" : "s"); }
+
+std::string reason_for(const Decision& d, Years max_years) {
+  const std::string basis = d.basis == Basis::after_tax ? "after-tax" : "before-tax";
+  if (d.timing.keep_years == 0) {
+    return fmt::format(
+        "Replace now: on an {} basis the defender's least EUAC is {} (keeping {}) against the "
+        "challenger's {} (economic life {}), and no period of keeping it costs less than "
+        "replacing it at once.",
+        basis, money(d.defender_euac), years(d.defender_best_years), money(d.challenger_euac),
+        years(d.challenger_esl));
+  }
+  const std::string horizon = d.timing.keep_years == max_years
+                                  ? " (the end of the years given for it)"
+                                  : "";
+  return fmt::format(
+      "Keep the defender {} more{} and then replace it: on an {} basis its least EUAC is {} "
+      "(keeping {}) against the challenger's {} (economic life {}).",
+      years(d.timing.keep_years), horizon, basis, money(d.defender_euac),
+      years(d.defender_best_years), money(d.challenger_euac), years(d.challenger_esl));
+}
+
+}  // namespace
+
+Decision decide(const AssetAnalysis& defender, const AssetAnalysis& challenger,
+                const tax::Rates& rates) {
+  Decision d{};
+  d.basis = rates.after_tax() ? Basis::after_tax : Basis::before_tax;
+  const BasisAnalysis& def = defender.on(d.basis);
+  const BasisAnalysis& ch = challenger.on(d.basis);
+  d.challenger_euac = ch.curve.best_euac;
+  d.challenger_esl = ch.curve.best_years;
+  d.defender_euac = def.curve.best_euac;
+  d.defender_best_years = def.curve.best_years;
+  d.timing = optimal_replacement(def.costs, d.challenger_euac);
+  d.verdict = d.timing.keep_years == 0 ? Verdict::replace : Verdict::keep;
+  d.reason = reason_for(d, def.costs.max_years());
+  return d;
+}
+
+CaseResult analyse(const Case& input) {
+  validate(input.challenger, "$.challenger");
+  if (input.challenger.age_years != 0) {
+    throw InputError("$.challenger.age_years", "a challenger is new: age must be 0");
+  }
+  if (input.defender) validate(*input.defender, "$.defender");
+  const tax::Rates& rates = input.rates;
+  CaseResult result{rates.after_tax() ? Basis::after_tax : Basis::before_tax,
+                    analyse_asset(input.challenger, rates), std::nullopt, std::nullopt,
+                    std::nullopt};
+  if (input.defender) {
+    result.defender = analyse_asset(*input.defender, rates);
+    result.decision = decide(*result.defender, result.challenger, rates);
+  }
+  if (input.study_period_years) {
+    const KeepingCosts* defender =
+        result.defender ? &result.defender->on(result.basis).costs : nullptr;
+    result.study_period = study_period(defender, result.challenger.on(result.basis).costs,
+                                       *input.study_period_years);
+  }
+  return result;
+}
+
+const char* to_string(Basis basis) {
+  return basis == Basis::after_tax ? "after_tax" : "before_tax";
+}
+
+const char* to_string(Verdict verdict) { return verdict == Verdict::keep ? "keep" : "replace"; }
+
+}  // namespace tenure::replacement

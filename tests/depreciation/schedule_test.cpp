@@ -1,0 +1,80 @@
+// Schedule: deductions, book values and the disposal-year rule of one method on one basis.
+#include "depreciation/schedule.h"
+
+#include <gtest/gtest.h>
+
+#include <limits>
+
+#include "depreciation/no_depreciation.h"
+#include "depreciation/straight_line.h"
+#include "depreciation/sum_of_years_digits.h"
+#include "input_error_matcher.h"
+
+namespace tenure::depreciation {
+namespace {
+
+using testing::throws_input_error;
+
+constexpr double kMoneyTolerance = 1e-9;  // amounts of a few thousand; only rounding noise
+
+TEST(Schedule, DeductionIsZeroOutsideTheSchedule) {
+  const Schedule s(StraightLine(StraightLineSpec{3, 0}), 3000);
+  EXPECT_EQ(s.basis(), 3000);
+  EXPECT_EQ(s.years(), 3);
+  EXPECT_EQ(s.deduction(0), 0);
+  EXPECT_EQ(s.deduction(-2), 0);
+  EXPECT_EQ(s.deduction(1), 1000);
+  EXPECT_EQ(s.deduction(4), 0);
+}
+
+TEST(Schedule, BookValueIsBasisLessDeductionsSoFar) {
+  // Closed form, SYD over 4 years of 1000: 400, 300, 200, 100.
+  const Schedule s(SumOfYearsDigits(SumOfYearsDigitsSpec{4, 0}), 1000);
+  const std::vector<double> expected = {1000, 600, 300, 100, 0};
+  for (Years y = 0; y <= 4; ++y) {
+    EXPECT_NEAR(s.book_value(y), expected[static_cast<std::size_t>(y)], kMoneyTolerance) << y;
+  }
+  EXPECT_NEAR(s.book_value(9), 0, kMoneyTolerance);
+}
+
+TEST(Schedule, BookMethodsTakeAFullYearWhenSold) {
+  // SPEC 6: book methods take a full year in the disposal year.
+  const Schedule s(SumOfYearsDigits(SumOfYearsDigitsSpec{4, 0}), 1000);
+  EXPECT_NEAR(s.deduction_if_sold(2), 300, kMoneyTolerance);
+  EXPECT_NEAR(s.book_value_if_sold(2), 300, kMoneyTolerance);
+  EXPECT_EQ(s.deduction_if_sold(5), 0);
+  EXPECT_NEAR(s.book_value_if_sold(5), 0, kMoneyTolerance);
+  EXPECT_EQ(s.book_value_if_sold(0), 1000);
+}
+
+TEST(Schedule, NoDepreciationKeepsTheBasis) {
+  const Schedule s(NoDepreciation{}, 5000);
+  EXPECT_EQ(s.years(), 0);
+  EXPECT_EQ(s.deduction(1), 0);
+  EXPECT_EQ(s.book_value(0), 5000);
+  EXPECT_EQ(s.book_value(7), 5000);
+  EXPECT_EQ(s.deduction_if_sold(3), 0);
+  EXPECT_EQ(s.book_value_if_sold(3), 5000);
+}
+
+TEST(ScheduleChecks, BasisMustBeFiniteAndPositive) {
+  const NoDepreciation none;
+  EXPECT_TRUE(throws_input_error([&] { Schedule(none, 0); }, "basis", "must be > 0"));
+  EXPECT_TRUE(throws_input_error([&] { Schedule(none, -10); }, "basis", "must be > 0"));
+  const double nan = std::numeric_limits<double>::quiet_NaN();
+  EXPECT_TRUE(throws_input_error([&] { Schedule(none, nan); }, "basis", "must be a finite number"));
+}
+
+TEST(ScheduleChecks, YearMustNotBeNegative) {
+  const Schedule s(StraightLine(StraightLineSpec{3, 0}), 3000);
+  EXPECT_TRUE(throws_input_error([&] { s.book_value(-1); }, "year", "must be >= 0"));
+  EXPECT_TRUE(throws_input_error([&] { s.book_value_if_sold(-1); }, "year", "must be >= 0"));
+}
+
+TEST(ScheduleChecks, SalvageAboveBasisIsReportedFromTheMethod) {
+  EXPECT_TRUE(throws_input_error([] { Schedule(StraightLine(StraightLineSpec{3, 5000}), 3000); },
+                                 "salvage", "must not exceed the basis"));
+}
+
+}  // namespace
+}  // namespace tenure::depreciation
