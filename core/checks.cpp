@@ -32,4 +32,16 @@ void require_tax_rate(Rate value, std::string_view where) {
   if (value < 0 || value >= 1) throw InputError(std::string(where), "must be in [0, 1)");
 }
 
+bool is_plain_identifier(std::string_view name) {
+  if (name.empty() || name.size() > 128) return false;
+  const auto letter = [](char c) {
+    return (c >= 'A' && c <= 'Z') || (c >= 'a' && c <= 'z') || c == '_';
+  };
+  if (!letter(name[0])) return false;
+  for (char c : name) {
+    if (!letter(c) && !(c >= '0' && c <= '9')) return false;
+  }
+  return true;
+}
+
 }  // namespace tenure

@@ -18,4 +18,8 @@ void require_rate(Rate value, std::string_view where);
 // A tax rate: 0 <= t < 1.
 void require_tax_rate(Rate value, std::string_view where);
 
+// A plain SQL identifier: [A-Za-z_][A-Za-z0-9_]*, at most 128 characters. Policy sources must be
+// one, so that nothing a policy says can change the SQL tenure runs.
+bool is_plain_identifier(std::string_view name);
+
 }  // namespace tenure

@@ -1,0 +1,54 @@
+// Reads the maintenance database's three input relations (SPEC 3) through the policy's sources
+// into review::FleetData, in one sequential pass over each: no ORDER BY, no per-event storage.
+// Bad rows never stop the run: each is skipped with a reason a person can act on, collected for
+// tenure_rejected. The relations are only read (SELECT), never written.
+//
+//   check_sources(db, policy.sources);            // InputError naming a missing relation/column
+//   FleetData data(as_of, policy.cost_escalation);
+//   ReadReport report = read_fleet(db, policy, data);
+//   report.rejected[0].reason;   // "occurred_on '2023-02-29' is not a valid date (YYYY-MM-DD)"
+//
+// Row references name the row's position in the scan ("row 17") and its key values, since views
+// have no rowid.
+//
+// Rules (cited by the code):
+//   (1) asset: asset_id present, valid UTF-8, at most 256 bytes, not seen before (a duplicate is
+//       rejected, the first row kept); asset_class present and in the policy; in_service_on a
+//       valid date; first_cost a finite number > 0; retired_on NULL or a valid date not before
+//       in_service_on.
+//   (2) cost_event: asset_id of an accepted asset; occurred_on a valid date, not before
+//       in_service_on and not after retired_on; amount a finite number (negative is a credit).
+//   (3) asset_valuation: as (2), with amount a finite number >= 0.
+//   (4) Events and valuations dated after the as-of date are not bad rows: they are not counted
+//       and are tallied in rows_after_as_of.
+#pragma once
+
+#include <cstdint>
+#include <string>
+#include <vector>
+
+#include "db/connection.h"
+#include "review/fleet_data.h"
+#include "review/policy.h"
+
+namespace tenure::db {
+
+struct Rejection {
+  std::string source;   // the relation as named by the policy's sources
+  std::string row_ref;  // "row 17 (asset_id 'PU-0017')"
+  std::string reason;
+};
+
+struct ReadReport {
+  std::int64_t rows_read = 0;
+  std::int64_t rows_after_as_of = 0;
+  std::vector<Rejection> rejected;
+};
+
+// Throws InputError naming "$.sources.<key>" when a relation or one of its columns is missing.
+void check_sources(Connection& db, const review::Sources& sources);
+
+// Fills `data` (constructed with the as-of date and cost escalation) from the three relations.
+ReadReport read_fleet(Connection& db, const review::Policy& policy, review::FleetData& data);
+
+}  // namespace tenure::db

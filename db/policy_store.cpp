@@ -1,0 +1,33 @@
+// The stored policy (see policy_store.h).
+#include "db/policy_store.h"
+
+namespace tenure::db {
+
+namespace {
+constexpr std::string_view kCreate =
+    "CREATE TABLE IF NOT EXISTS tenure_policy("
+    " policy_id INTEGER PRIMARY KEY,"
+    " stored_at TEXT NOT NULL DEFAULT (strftime('%Y-%m-%dT%H:%M:%SZ','now')),"
+    " policy_json TEXT NOT NULL)";
+}  // namespace
+
+std::int64_t store_policy(Connection& db, std::string_view policy_json) {
+  Transaction tx(db, Transaction::Kind::immediate);
+  db.exec(kCreate);
+  Statement insert(db, "INSERT INTO tenure_policy(policy_json) VALUES (?1)");
+  insert.bind(1, policy_json);
+  insert.run();
+  const std::int64_t id = sqlite3_last_insert_rowid(db.handle());
+  tx.commit();
+  return id;
+}
+
+std::optional<std::string> latest_policy(Connection& db) {
+  Statement exists(db, "SELECT 1 FROM sqlite_schema WHERE type = 'table' AND name = 'tenure_policy'");
+  if (!exists.step()) return std::nullopt;
+  Statement latest(db, "SELECT policy_json FROM tenure_policy ORDER BY policy_id DESC LIMIT 1");
+  if (!latest.step()) return std::nullopt;
+  return std::string(latest.text(0));
+}
+
+}  // namespace tenure::db

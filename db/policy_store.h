@@ -1,0 +1,24 @@
+// The policy kept in the maintenance database (table tenure_policy), so the nightly run needs
+// no file: `tenure policy set --db fleet.db policy.json` stores it, `tenure review --db fleet.db`
+// uses the latest one stored.
+//
+//   sqlite> SELECT policy_id, stored_at FROM tenure_policy ORDER BY policy_id DESC LIMIT 1;
+//   3|2026-11-30T02:00:00Z
+#pragma once
+
+#include <optional>
+#include <string>
+#include <string_view>
+
+#include "db/connection.h"
+
+namespace tenure::db {
+
+// Stores the JSON text as given (comments kept), in its own transaction; returns its policy_id.
+// The caller checks the text first (formats/policy_json.h).
+std::int64_t store_policy(Connection& db, std::string_view policy_json);
+
+// The latest stored policy text, or nullopt when none is stored (or the table does not exist).
+std::optional<std::string> latest_policy(Connection& db);
+
+}  // namespace tenure::db

@@ -1,0 +1,52 @@
+// The nightly review on one database connection, start to end (SPEC 6 and 7):
+//   1. read the policy (stored or given) and check the input relations and columns exist;
+//   2. read the relations in one read transaction (a consistent snapshot, no lock held after);
+//   3. compute every class and asset (review/), touching no table;
+//   4. write everything in ONE short write transaction: schema migrations, the run, results,
+//      rejected rows. A failure or a kill before its commit leaves the previous results intact.
+//
+//   Connection db = Connection::open("fleet.db");
+//   RunSummary s = run_review(db, {.policy_json = text, .as_of = as_of});
+//   s.run_id; s.due; s.newly_due;
+#pragma once
+
+#include <cstdint>
+#include <functional>
+#include <optional>
+#include <string>
+
+#include "db/connection.h"
+#include "fleet/date.h"
+#include "review/fleet_review.h"
+
+namespace tenure::db {
+
+struct ReviewOptions {
+  std::optional<std::string> policy_json;  // nullopt: the latest stored policy
+  std::optional<Date> as_of;               // nullopt: today (UTC)
+  review::Progress progress;               // optional progress callback
+  std::function<void()> before_commit;     // optional hook, called just before COMMIT
+};
+
+struct RunSummary {
+  std::int64_t run_id = 0;
+  std::string as_of;
+  std::int64_t rows_read = 0;
+  std::int64_t rows_rejected = 0;
+  std::int64_t rows_after_as_of = 0;
+  std::int64_t assets_reviewed = 0;
+  std::int64_t keep = 0, review = 0, replace = 0;
+  std::int64_t due = 0;        // review + replace
+  std::int64_t newly_due = 0;  // due now, not due in the previous successful run
+  std::string basis;           // after_tax | before_tax
+  std::string money;           // real | nominal
+};
+
+// Throws InputError for a bad policy, a missing relation or column, or no policy at all;
+// RuntimeFailure when the database cannot be read or written.
+RunSummary run_review(Connection& db, const ReviewOptions& options);
+
+// Today's date in UTC.
+Date today_utc();
+
+}  // namespace tenure::db

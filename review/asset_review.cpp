@@ -1,0 +1,135 @@
+// One asset's defender analysis and verdict (see asset_review.h).
+#include "review/asset_review.h"
+
+#include <algorithm>
+#include <cmath>
+
+#include <fmt/format.h>
+
+#include "depreciation/schedule.h"
+
+namespace tenure::review {
+
+const char* to_string(Verdict verdict) {
+  switch (verdict) {
+    case Verdict::keep: return "keep";
+    case Verdict::review: return "review";
+    case Verdict::replace: return "replace";
+  }
+  return "keep";
+}
+
+Date one_year_before(Date as_of) {
+  const int day = as_of.month() == 2 && as_of.day() == 29 ? 28 : as_of.day();
+  return *Date::from_ymd(as_of.year() - 1, as_of.month(), day);
+}
+
+DefenderInputs defender_inputs(std::size_t asset, const FleetData& data, const ClassModel& model) {
+  const AssetRecord& record = data.assets[asset];
+  const auto index = static_cast<fleet::CostHistory::AssetIndex>(asset);
+  DefenderInputs in;
+  in.age_years = completed_years(record.in_service, data.as_of);
+  // Market value now: its latest valuation within the last 12 months, else the class curve.
+  const Date window_start = one_year_before(data.as_of);
+  const Valuation* latest = nullptr;
+  for (const Valuation& v : data.valuations[asset]) {
+    if (v.valued_on >= window_start && v.valued_on <= data.as_of &&
+        (!latest || v.valued_on >= latest->valued_on)) {
+      latest = &v;
+    }
+  }
+  if (latest) {
+    in.market_value_now = latest->amount;
+    in.market_value_source = "valuation of " + latest->valued_on.to_iso();
+  } else {
+    in.market_value_now = record.first_cost * model.value_curve.fraction_at(in.age_years);
+    in.market_value_source = "class value curve";
+  }
+  in.credibility = model.cost_curve
+                       ? fleet::credibility(data.costs.year_costs(index), *model.cost_curve)
+                       : fleet::Credibility{0, 1, 0, 1, false};
+  replacement::Ownership& own = in.ownership;
+  own.first_cost = record.first_cost;
+  own.age_years = in.age_years;
+  own.value_now = in.market_value_now;
+  own.depreciation = depreciation::make_method(model.policy->depreciation);
+  if (model.cost_curve) {
+    const Years remaining = std::max(1, model.policy->max_life_years - in.age_years);
+    for (Years k = 1; k <= remaining; ++k) {
+      own.operating_costs.push_back(model.cost_at(in.age_years + k, in.credibility.factor));
+      own.market_values.push_back(record.first_cost *
+                                  model.value_curve.fraction_at(in.age_years + k));
+    }
+  }
+  return in;
+}
+
+namespace {
+
+std::string money(Money amount) { return fmt::format("{:.2f}", amount); }
+std::string years(Years n) { return fmt::format("{} year{}", n, n == 1 ? "" : "s"); }
+
+}  // namespace
+
+AssetReview review_asset(std::size_t asset, const FleetData& data, const ClassModel& model,
+                         const Policy& policy) {
+  const tax::Rates& rates = policy.rates;
+  AssetReview r{};
+  r.asset = asset;
+  r.inputs = defender_inputs(asset, data, model);
+  r.verdict = Verdict::review;
+  r.basis = rates.after_tax() ? replacement::Basis::after_tax : replacement::Basis::before_tax;
+  r.book_value_now = depreciation::Schedule(*r.inputs.ownership.depreciation,
+                                            r.inputs.ownership.first_cost)
+                         .book_value(r.inputs.age_years);
+  if (!model.challenger) {
+    r.reason = fmt::format("Review: {}; tenure cannot weigh this asset until the class has a "
+                           "complete year of costs.",
+                           model.note);
+    return r;
+  }
+  r.defender = replacement::analyse_asset(r.inputs.ownership, rates);
+  r.decision = replacement::decide(*r.defender, *model.challenger, rates);
+  const replacement::Decision& d = *r.decision;
+  r.defender_euac_before_tax = r.defender->before_tax.curve.best_euac;
+  if (r.defender->after_tax) r.defender_euac_after_tax = r.defender->after_tax->curve.best_euac;
+  r.marginal_cost_next_year = r.defender->on(r.basis).curve.marginal_costs[0];
+  const Years esl = d.challenger_esl;
+  r.class_esl_years = esl;
+  const Years age = r.inputs.age_years;
+  const std::string basis = r.basis == replacement::Basis::after_tax ? "after-tax" : "before-tax";
+  const bool close = std::abs(d.defender_euac - d.challenger_euac) <=
+                     policy.review_margin * d.challenger_euac;
+  if (d.timing.keep_years == 0) {
+    r.verdict = Verdict::replace;
+    r.reason = fmt::format(
+        "Replace: keeping it any longer costs more than a new unit; its least {} EUAC is {} "
+        "against the challenger's {} and next year's marginal cost is {}.",
+        basis, money(d.defender_euac), money(d.challenger_euac),
+        money(*r.marginal_cost_next_year));
+  } else if (age >= esl) {
+    r.verdict = Verdict::review;
+    r.reason = fmt::format(
+        "Review: at {} it is at or past the class's economic life of {}; replacing after {} "
+        "more is cheapest ({} EUAC {} against the challenger's {}).",
+        years(age), years(esl), years(d.timing.keep_years), basis, money(d.defender_euac),
+        money(d.challenger_euac));
+  } else if (close) {
+    r.verdict = Verdict::review;
+    r.reason = fmt::format(
+        "Review: its least {} EUAC of {} is within {:g}% of the challenger's {}; replacing "
+        "after {} more is cheapest.",
+        basis, money(d.defender_euac), policy.review_margin * 100, money(d.challenger_euac),
+        years(d.timing.keep_years));
+  } else {
+    r.verdict = Verdict::keep;
+    r.reason = fmt::format(
+        "Keep: at {} it is short of the class's economic life of {}; its least {} EUAC is {} "
+        "against the challenger's {}, and replacing after {} more is cheapest.",
+        years(age), years(esl), basis, money(d.defender_euac), money(d.challenger_euac),
+        years(d.timing.keep_years));
+  }
+  return r;
+}
+
+}  // namespace tenure::review

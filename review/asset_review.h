@@ -1,0 +1,62 @@
+// One asset in service in the nightly review (SPEC 6 "Nightly defender" and "Nightly verdict"):
+// its age, market value now, credibility-weighted future costs, its defender analysis against
+// the class challenger, the optimal replacement timing and a keep / review / replace verdict.
+//
+//   AssetReview r = review_asset(index, data, vans, policy);
+//   r.verdict;   // Verdict::review
+//   r.reason;    // "Review: at 9 years it is past the class's economic life of 7 years; ..."
+#pragma once
+
+#include <optional>
+#include <string>
+#include <vector>
+
+#include "fleet/credibility.h"
+#include "replacement/case_analysis.h"
+#include "review/class_model.h"
+#include "review/fleet_data.h"
+#include "review/policy.h"
+
+namespace tenure::review {
+
+enum class Verdict { keep, review, replace };
+const char* to_string(Verdict verdict);
+
+// The defender as the engine sees it, and where its numbers came from.
+struct DefenderInputs {
+  Years age_years;
+  Money market_value_now;
+  std::string market_value_source;  // "valuation of 2026-05-14" or "class value curve"
+  fleet::Credibility credibility;
+  replacement::Ownership ownership;  // empty series when the class has no cost curve
+};
+
+struct AssetReview {
+  std::size_t asset;  // index in FleetData::assets
+  DefenderInputs inputs;
+  Verdict verdict;
+  std::string reason;
+  replacement::Basis basis;
+  Money book_value_now;  // basis less the full deductions of its completed years
+  // Summary figures, kept when the full analysis below is dropped (policy detail).
+  std::optional<Money> defender_euac_before_tax;
+  std::optional<Money> defender_euac_after_tax;
+  std::optional<Money> marginal_cost_next_year;  // on the basis
+  // Present when the class could be analysed (it has a cost curve).
+  std::optional<replacement::AssetAnalysis> defender;
+  std::optional<replacement::Decision> decision;
+  std::optional<Years> class_esl_years;  // the class challenger's ESL on the basis
+
+  bool due() const { return verdict != Verdict::keep; }
+};
+
+// The date one year before `as_of` (29 February -> 28 February): valuations dated after it, up
+// to the as-of date, count as the market value now.
+Date one_year_before(Date as_of);
+
+DefenderInputs defender_inputs(std::size_t asset, const FleetData& data, const ClassModel& model);
+
+AssetReview review_asset(std::size_t asset, const FleetData& data, const ClassModel& model,
+                         const Policy& policy);
+
+}  // namespace tenure::review

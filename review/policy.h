@@ -1,0 +1,51 @@
+// The nightly review's policy (SPEC 4): rates, how past costs are restated, the review margin,
+// where the input relations are, and per asset class the challenger and the models to fit.
+// formats/policy_json.h reads it from JSON; this header is the engine's view of it.
+//
+//   Policy p = read_policy(text);            // formats/policy_json.h
+//   const ClassPolicy& vans = p.classes.at("van-delivery");
+#pragma once
+
+#include <map>
+#include <optional>
+#include <string>
+
+#include "core/types.h"
+#include "depreciation/method.h"
+#include "fleet/cost_curve.h"
+#include "tax/rates.h"
+
+namespace tenure::review {
+
+struct ClassPolicy {
+  Money challenger_first_cost;         // a new unit's installed cost, > 0
+  Years max_life_years;                // longest life weighed, >= 1
+  depreciation::Spec depreciation;     // applied to each asset's own first cost
+  Rate annual_decline;                 // value-curve fallback where valuations are too few
+  fleet::CostModelChoice cost_model;   // linear, geometric or automatic ("auto")
+};
+
+// Names of the three input relations (tables or views); plain SQL identifiers only.
+struct Sources {
+  std::string assets = "asset";
+  std::string costs = "cost_event";
+  std::string valuations = "asset_valuation";
+};
+
+// Which assets keep their year-by-year tables (EUAC curve, cash flows) in the results: every
+// asset's summary row is always kept, and `tenure explain` can recompute any asset's tables.
+enum class Detail { none, due, all };
+
+struct Policy {
+  tax::Rates rates;
+  Detail detail = Detail::due;
+  Rate cost_escalation = 0;    // restates past costs into as-of-year money (then marr is real)
+  double review_margin = 0.05; // |D - C| <= margin * C puts an asset under review
+  Sources sources;
+  std::map<std::string, ClassPolicy, std::less<>> classes;
+
+  // Costs restated by a non-zero escalation are constant money, so rates must be real (SPEC 6).
+  bool real_money() const { return cost_escalation != 0; }
+};
+
+}  // namespace tenure::review
