@@ -93,16 +93,22 @@ std::string_view Statement::text(int column) const {
   return {p, static_cast<std::size_t>(sqlite3_column_bytes(stmt_, column))};
 }
 
-Transaction::Transaction(Connection& db, Kind kind) : db_(db) {
-  db_.exec(kind == Kind::immediate ? "BEGIN IMMEDIATE" : "BEGIN");
+Transaction::Transaction(Connection& db, Kind kind) : db_(db), nested_(db.in_transaction()) {
+  if (nested_) {
+    db_.exec("SAVEPOINT tenure");
+  } else {
+    db_.exec(kind == Kind::immediate ? "BEGIN IMMEDIATE" : "BEGIN");
+  }
 }
 
 Transaction::~Transaction() {
-  if (open_) sqlite3_exec(db_.handle(), "ROLLBACK", nullptr, nullptr, nullptr);
+  if (!open_) return;
+  const char* undo = nested_ ? "ROLLBACK TO tenure; RELEASE tenure" : "ROLLBACK";
+  sqlite3_exec(db_.handle(), undo, nullptr, nullptr, nullptr);
 }
 
 void Transaction::commit() {
-  db_.exec("COMMIT");
+  db_.exec(nested_ ? "RELEASE tenure" : "COMMIT");
   open_ = false;
 }
 

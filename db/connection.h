@@ -84,7 +84,9 @@ class Statement {
   sqlite3_stmt* stmt_ = nullptr;
 };
 
-// BEGIN ... COMMIT; the destructor rolls back a transaction that was not committed.
+// BEGIN ... COMMIT; the destructor rolls back a transaction that was not committed. Inside a
+// transaction the caller already holds, it is a SAVEPOINT instead: its work joins the caller's
+// transaction (committed or rolled back with it), and a failure rolls back only its own part.
 class Transaction {
  public:
   enum class Kind { deferred, immediate };
@@ -97,6 +99,7 @@ class Transaction {
  private:
   Connection& db_;
   bool open_ = true;
+  bool nested_ = false;
 };
 
 // "name" with double quotes, for an identifier that passed tenure::is_plain_identifier

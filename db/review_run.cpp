@@ -22,20 +22,6 @@ std::string now_utc_iso() {
   return fmt::format("{:%Y-%m-%dT%H:%M:%S}Z", fmt::gmtime(now));
 }
 
-// A read snapshot across the three relations; inside a caller's transaction, that one serves.
-class ReadSnapshot {
- public:
-  explicit ReadSnapshot(Connection& db) {
-    if (!db.in_transaction()) tx_.emplace(db, Transaction::Kind::deferred);
-  }
-  void end() {
-    if (tx_) tx_->commit();
-  }
-
- private:
-  std::optional<Transaction> tx_;
-};
-
 }  // namespace
 
 Date today_utc() {
@@ -62,10 +48,11 @@ RunSummary run_review(Connection& db, const ReviewOptions& options) {
   review::FleetData data(as_of, policy.cost_escalation);
   ReadReport report;
   {
-    ReadSnapshot snapshot(db);
+    // One read transaction: a consistent snapshot of the three relations.
+    Transaction snapshot(db, Transaction::Kind::deferred);
     check_sources(db, policy.sources);
     report = read_fleet(db, policy, data);
-    snapshot.end();
+    snapshot.commit();
   }
   const review::ReviewResult result = review::review_fleet(data, policy, options.progress);
 

@@ -1,0 +1,42 @@
+// The subcommands of `tenure`, one file each (case_command.cpp, schedule_command.cpp, ...).
+// Each add_*_command adds its subcommand, options and help to the app; its callback runs the
+// command and reports bad input by throwing InputError (exit_codes.h maps it to exit code 2).
+// A new command is one new file and one line in add_commands (app.cpp).
+//
+//   CLI::App app{"..."};
+//   Console console{std::cin, std::cout, std::cerr};
+//   add_commands(app, console);
+#pragma once
+
+#include <istream>
+#include <ostream>
+
+#include <CLI/CLI.hpp>
+
+namespace tenure::cli {
+
+// Where commands read and write; main passes the process's standard streams. The streams must
+// outlive the app.
+struct Console {
+  std::istream& in;
+  std::ostream& out;
+  std::ostream& err;
+};
+
+// The top-level app: description, --version, the footer, every command below.
+void add_commands(CLI::App& app, const Console& console);
+
+// tenure case FILE [--format json|table]
+void add_case_command(CLI::App& app, const Console& console);
+// tenure schedule --method M --basis B [--salvage S] [--life L] [--rate R] [--switch|--no-switch]
+//                 [--dispose-in-year Y] [--format table|json]
+void add_schedule_command(CLI::App& app, const Console& console);
+// tenure demo --db PATH [--assets N] [--events M] [--seed S] [--as-of DATE] [--force]
+//             [--no-bad-rows]
+void add_demo_command(CLI::App& app, const Console& console);
+// tenure review --db PATH [--policy FILE] [--as-of DATE] [--format table|json] [--quiet]
+void add_review_command(CLI::App& app, const Console& console);
+// tenure policy check FILE | set --db PATH FILE | show --db PATH
+void add_policy_command(CLI::App& app, const Console& console);
+
+}  // namespace tenure::cli

@@ -1,0 +1,30 @@
+// Exit codes of `tenure`, and the one place that turns errors into them and into messages.
+//
+//   0  ok            the command did its job; also --help and --version
+//   1  failure       something went wrong that is not the input's fault: a RuntimeFailure (a
+//                    database that cannot be written, say) or any unexpected exception
+//   2  bad input     a usage error (unknown option, missing argument: CLI11's parse errors) or
+//                    an InputError (a case file that is missing or unreadable, a bad field, an
+//                    out-of-range argument)
+//
+// Errors are one line on stderr, "tenure <command>: <where>: <rule>", for example
+//   tenure case: $.challenger.first_cost: must be > 0
+// No exception leaves run_command_line.
+//
+//   int main(int argc, char** argv) { ...; return run_command_line(app, argc, argv, out, err); }
+#pragma once
+
+#include <ostream>
+
+#include <CLI/CLI.hpp>
+
+namespace tenure::cli {
+
+enum class ExitCode : int { ok = 0, failure = 1, bad_input = 2 };
+
+// Parses the arguments, which runs the chosen command's callback, and returns the exit code.
+// Help and version text go to `out`, error messages to `err`.
+int run_command_line(CLI::App& app, int argc, const char* const* argv, std::ostream& out,
+                     std::ostream& err);
+
+}  // namespace tenure::cli

@@ -1,0 +1,75 @@
+// `tenure policy`: check a policy file, store it in the database, show the stored one.
+#include <memory>
+#include <string>
+
+#include <fmt/format.h>
+
+#include "cli/commands.h"
+#include "cli/input_file.h"
+#include "core/errors.h"
+#include "db/policy_store.h"
+#include "formats/policy_json.h"
+
+namespace tenure::cli {
+namespace {
+
+struct PolicyOptions {
+  std::string db;
+  std::string file;
+};
+
+void check(const PolicyOptions& o, const Console& console) {
+  const review::Policy policy = formats::read_policy(read_input_file(o.file, console.in));
+  console.out << fmt::format("{}: a valid policy with {} asset class{}\n", o.file,
+                             policy.classes.size(), policy.classes.size() == 1 ? "" : "es");
+}
+
+void set(const PolicyOptions& o, const Console& console) {
+  const std::string text = read_input_file(o.file, console.in);
+  formats::read_policy(text);  // refuse a bad policy before storing it
+  db::Connection db = db::Connection::open(o.db);
+  const auto id = db::store_policy(db, text);
+  console.out << fmt::format("stored policy {} in {}\n", id, o.db);
+}
+
+void show(const PolicyOptions& o, const Console& console) {
+  db::Connection db = db::Connection::open(o.db);
+  const auto text = db::latest_policy(db);
+  if (!text) throw InputError("--db", "no policy is stored in '" + o.db + "'");
+  console.out << *text;
+  if (text->empty() || text->back() != '\n') console.out << '\n';
+}
+
+}  // namespace
+
+void add_policy_command(CLI::App& app, const Console& console) {
+  CLI::App* command = app.add_subcommand(
+      "policy", "Check a policy file, store it in the database, or show the stored one");
+  command->require_subcommand(1);
+  command->footer(
+      "Examples:\n"
+      "  tenure policy check policy.json\n"
+      "  tenure policy set --db fleet.db policy.json\n"
+      "  tenure policy show --db fleet.db");
+
+  auto check_options = std::make_shared<PolicyOptions>();
+  CLI::App* check_command = command->add_subcommand("check", "Check a policy file and say what is wrong");
+  check_command->add_option("FILE", check_options->file, "the policy file (JSON); '-' reads standard input")
+      ->required();
+  check_command->callback([check_options, console] { check(*check_options, console); });
+
+  auto set_options = std::make_shared<PolicyOptions>();
+  CLI::App* set_command = command->add_subcommand(
+      "set", "Check a policy file and store it; the nightly review uses the latest stored");
+  set_command->add_option("--db", set_options->db, "the maintenance database (SQLite file)")->required();
+  set_command->add_option("FILE", set_options->file, "the policy file (JSON); '-' reads standard input")
+      ->required();
+  set_command->callback([set_options, console] { set(*set_options, console); });
+
+  auto show_options = std::make_shared<PolicyOptions>();
+  CLI::App* show_command = command->add_subcommand("show", "Print the latest stored policy");
+  show_command->add_option("--db", show_options->db, "the maintenance database (SQLite file)")->required();
+  show_command->callback([show_options, console] { show(*show_options, console); });
+}
+
+}  // namespace tenure::cli

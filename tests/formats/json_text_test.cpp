@@ -1,0 +1,60 @@
+// Strict JSON parsing: comments allowed, duplicate keys and overflowing numbers rejected with
+// the JSON path where they occur, syntax errors with their line and column.
+#include <gtest/gtest.h>
+
+#include "core/errors.h"
+#include "formats/json_text.h"
+
+namespace tenure::formats {
+namespace {
+
+// Runs `parse_json_text` and returns the InputError it throws ("" where/rule if none).
+InputError error_of(std::string_view text) {
+  try {
+    parse_json_text(text);
+  } catch (const InputError& error) {
+    return error;
+  }
+  return InputError("", "");
+}
+
+TEST(JsonText, AllowsLineAndBlockComments) {
+  const auto doc = parse_json_text("// head\n{\"a\": 1, /* between */ \"b\": [2, 3] // tail\n}");
+  EXPECT_EQ(doc["a"], 1);
+  EXPECT_EQ(doc["b"][1], 3);
+}
+
+TEST(JsonText, SyntaxErrorNamesLineAndColumn) {
+  const InputError error = error_of("{\"a\": 1,\n \"b\": ,}");
+  EXPECT_EQ(error.where(), "$");
+  EXPECT_EQ(error.rule().rfind("invalid JSON at line 2, column 7: ", 0), 0u) << error.rule();
+}
+
+TEST(JsonText, EmptyTextIsInvalid) {
+  const InputError error = error_of("");
+  EXPECT_EQ(error.where(), "$");
+  EXPECT_EQ(error.rule().rfind("invalid JSON at line 1, column 1: ", 0), 0u) << error.rule();
+}
+
+TEST(JsonText, DuplicateKeyIsAnErrorAtItsPath) {
+  const InputError top = error_of("{\"marr\": 0.1, \"marr\": 0.2}");
+  EXPECT_EQ(top.where(), "$.marr");
+  EXPECT_EQ(top.rule(), "duplicate key");
+  const InputError nested = error_of("{\"a\": [{\"x\": 1}, {\"y\": 1, \"y\": 2}]}");
+  EXPECT_EQ(nested.where(), "$.a[1].y");
+}
+
+TEST(JsonText, SameKeyInSiblingObjectsIsFine) {
+  EXPECT_NO_THROW(parse_json_text("{\"a\": {\"x\": 1}, \"b\": {\"x\": 2}, \"c\": [{\"x\": 3}]}"));
+}
+
+TEST(JsonText, OverflowingNumberNamesItsPath) {
+  const InputError top = error_of("{\"marr\": 1e999}");
+  EXPECT_EQ(top.where(), "$.marr");
+  EXPECT_EQ(top.rule(), "must be a finite number (this one overflows a double)");
+  const InputError element = error_of("{\"c\": {\"costs\": [1, [2], -1e999]}}");
+  EXPECT_EQ(element.where(), "$.c.costs[2]");
+}
+
+}  // namespace
+}  // namespace tenure::formats
