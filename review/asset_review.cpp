@@ -48,20 +48,26 @@ DefenderInputs defender_inputs(std::size_t asset, const FleetData& data, const C
   in.credibility = model.cost_curve
                        ? fleet::credibility(data.costs.year_costs(index), *model.cost_curve)
                        : fleet::Credibility{0, 1, 0, 1, false};
-  replacement::Ownership& own = in.ownership;
-  own.first_cost = record.first_cost;
-  own.age_years = in.age_years;
-  own.value_now = in.market_value_now;
+  in.ownership = defender_ownership(model, record.first_cost, in.age_years, in.market_value_now,
+                                    in.credibility.factor);
+  return in;
+}
+
+replacement::Ownership defender_ownership(const ClassModel& model, Money first_cost, Years age,
+                                          Money market_value_now, double credibility_factor) {
+  replacement::Ownership own;
+  own.first_cost = first_cost;
+  own.age_years = age;
+  own.value_now = market_value_now;
   own.depreciation = depreciation::make_method(model.policy->depreciation);
   if (model.cost_curve) {
-    const Years remaining = std::max(1, model.policy->max_life_years - in.age_years);
+    const Years remaining = std::max(1, model.policy->max_life_years - age);
     for (Years k = 1; k <= remaining; ++k) {
-      own.operating_costs.push_back(model.cost_at(in.age_years + k, in.credibility.factor));
-      own.market_values.push_back(record.first_cost *
-                                  model.value_curve.fraction_at(in.age_years + k));
+      own.operating_costs.push_back(model.cost_at(age + k, credibility_factor));
+      own.market_values.push_back(first_cost * model.value_curve.fraction_at(age + k));
     }
   }
-  return in;
+  return own;
 }
 
 namespace {
@@ -73,10 +79,15 @@ std::string years(Years n) { return fmt::format("{} year{}", n, n == 1 ? "" : "s
 
 AssetReview review_asset(std::size_t asset, const FleetData& data, const ClassModel& model,
                          const Policy& policy) {
+  return judge(asset, defender_inputs(asset, data, model), model, policy);
+}
+
+AssetReview judge(std::size_t asset, DefenderInputs inputs, const ClassModel& model,
+                  const Policy& policy) {
   const tax::Rates& rates = policy.rates;
   AssetReview r{};
   r.asset = asset;
-  r.inputs = defender_inputs(asset, data, model);
+  r.inputs = std::move(inputs);
   r.verdict = Verdict::review;
   r.basis = rates.after_tax() ? replacement::Basis::after_tax : replacement::Basis::before_tax;
   r.book_value_now = depreciation::Schedule(*r.inputs.ownership.depreciation,

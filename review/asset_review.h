@@ -54,7 +54,18 @@ struct AssetReview {
 // to the as-of date, count as the market value now.
 Date one_year_before(Date as_of);
 
+// The defender's future (SPEC 6, nightly defender): costs on the class curve at ages a+1, a+2,
+// ... times its credibility factor, market values on the class value curve times its own first
+// cost, weighed for 1..max(1, max_life_years - a) more years; empty series without a cost curve.
+replacement::Ownership defender_ownership(const ClassModel& model, Money first_cost, Years age,
+                                          Money market_value_now, double credibility_factor);
+
 DefenderInputs defender_inputs(std::size_t asset, const FleetData& data, const ClassModel& model);
+
+// The verdict on a defender described by `inputs` (also how `tenure explain` recomputes a stored
+// asset). `asset` is only carried into the result.
+AssetReview judge(std::size_t asset, DefenderInputs inputs, const ClassModel& model,
+                  const Policy& policy);
 
 AssetReview review_asset(std::size_t asset, const FleetData& data, const ClassModel& model,
                          const Policy& policy);

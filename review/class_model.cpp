@@ -12,27 +12,11 @@ Money ClassModel::cost_at(Years age_year, double factor) const {
   return std::max(0.0, cost_curve->predict(age_year) * factor);
 }
 
-ClassModel build_class_model(const std::string& asset_class, const ClassPolicy& policy,
-                             const FleetData& data, const std::vector<std::size_t>& members,
-                             const tax::Rates& rates) {
-  fleet::CostPool cost_pool;
-  fleet::ValuationPool value_pool;
-  for (std::size_t index : members) {
-    const auto asset = static_cast<fleet::CostHistory::AssetIndex>(index);
-    cost_pool.add_asset(data.costs.year_costs(asset));
-    const AssetRecord& record = data.assets[index];
-    for (const Valuation& v : data.valuations[index]) {
-      value_pool.add(record.in_service, record.first_cost, v.valued_on, v.amount);
-    }
-  }
-  ClassModel model{asset_class,
-                   &policy,
-                   members.size(),
-                   fit_cost_curve(cost_pool, policy.cost_model),
-                   fleet::fit_value_curve(value_pool, policy.annual_decline),
-                   std::nullopt,
-                   std::nullopt,
-                   {}};
+ClassModel make_class_model(const std::string& asset_class, const ClassPolicy& policy,
+                            std::size_t assets, std::optional<fleet::CostCurve> cost_curve,
+                            fleet::ValueCurve value_curve, const tax::Rates& rates) {
+  ClassModel model{asset_class,           &policy,      assets, std::move(cost_curve),
+                   std::move(value_curve), std::nullopt, std::nullopt, {}};
   if (!model.cost_curve) {
     model.note = fmt::format("no complete year of cost history for class '{}', so its costs "
                              "cannot be estimated",
@@ -58,6 +42,24 @@ ClassModel build_class_model(const std::string& asset_class, const ClassPolicy& 
   model.challenger = replacement::analyse_asset(challenger, rates);
   model.challenger_input = std::move(challenger);
   return model;
+}
+
+ClassModel build_class_model(const std::string& asset_class, const ClassPolicy& policy,
+                             const FleetData& data, const std::vector<std::size_t>& members,
+                             const tax::Rates& rates) {
+  fleet::CostPool cost_pool;
+  fleet::ValuationPool value_pool;
+  for (std::size_t index : members) {
+    const auto asset = static_cast<fleet::CostHistory::AssetIndex>(index);
+    cost_pool.add_asset(data.costs.year_costs(asset));
+    const AssetRecord& record = data.assets[index];
+    for (const Valuation& v : data.valuations[index]) {
+      value_pool.add(record.in_service, record.first_cost, v.valued_on, v.amount);
+    }
+  }
+  return make_class_model(asset_class, policy, members.size(),
+                          fit_cost_curve(cost_pool, policy.cost_model),
+                          fleet::fit_value_curve(value_pool, policy.annual_decline), rates);
 }
 
 }  // namespace tenure::review

@@ -35,7 +35,14 @@ struct ClassModel {
   Money cost_at(Years age_year, double factor = 1.0) const;
 };
 
-// `members` are the indices in data.assets of the class's assets.
+// The class model from curves already fitted (or read back from a stored run, as `tenure
+// explain` does): builds and analyses the challenger when there is a cost curve.
+ClassModel make_class_model(const std::string& asset_class, const ClassPolicy& policy,
+                            std::size_t assets, std::optional<fleet::CostCurve> cost_curve,
+                            fleet::ValueCurve value_curve, const tax::Rates& rates);
+
+// Fits the class's curves on its members' data, then make_class_model. `members` are the indices
+// in data.assets of the class's assets.
 ClassModel build_class_model(const std::string& asset_class, const ClassPolicy& policy,
                              const FleetData& data, const std::vector<std::size_t>& members,
                              const tax::Rates& rates);
