@@ -10,6 +10,8 @@
 
 #include "core/checks.h"
 #include "core/errors.h"
+#include "db/cost_event_scan.h"
+#include "fleet/asset_index.h"
 
 namespace tenure::db {
 namespace {
@@ -31,8 +33,26 @@ struct IdHash {
     return std::hash<std::string_view>{}(s);
   }
 };
-using IdIndex = std::unordered_map<std::string, std::uint32_t, IdHash, std::equal_to<>>;
 using IdSet = std::unordered_set<std::string, IdHash, std::equal_to<>>;
+
+// Cost events arrive in date order, so most rows repeat the previous row's date text: parse it
+// once per distinct text.
+class DateMemo {
+ public:
+  std::optional<Date> parse(std::string_view text) {
+    if (text.size() > sizeof(text_)) return parse_iso_date(text);  // never valid; not kept
+    if (text != std::string_view(text_, length_)) {
+      length_ = text.copy(text_, sizeof(text_));
+      date_ = parse_iso_date(text);
+    }
+    return date_;
+  }
+
+ private:
+  char text_[16] = {};
+  std::size_t length_ = 0;
+  std::optional<Date> date_;
+};
 
 bool valid_utf8(std::string_view s) {
   std::size_t i = 0;
@@ -145,7 +165,7 @@ class Reader {
       }
       const auto index = data_.add_asset(
           {std::string(id), std::string(asset_class), *in_service, q.real(3), retired});
-      index_.emplace(std::string(id), index);
+      index_.insert(id, index);
     }
   }
 
@@ -155,35 +175,71 @@ class Reader {
       reason = "asset_id is missing";
       return std::nullopt;
     }
-    if (const auto it = index_.find(id); it != index_.end()) return it->second;
+    if (const auto index = index_.find(id); index != fleet::AssetIndex::npos) return index;
     reason = rejected_ids_.contains(id)
                  ? fmt::format("asset {} was rejected (see its row in the asset relation)", shown(id))
                  : fmt::format("asset_id {} is not in the asset relation", shown(id));
     return std::nullopt;
   }
 
+  // Rule (2), on batches scanned by a second thread (cost_event_scan.h).
   void read_costs() {
     const std::string& source = policy_.sources.costs;
-    Statement q(db_, fmt::format("SELECT asset_id, occurred_on, amount FROM {}", quoted(source)));
-    std::int64_t row = 0;
+    CostEventScan scan(db_, source);
+    while (const EventBatch* batch = scan.next()) {
+      read_cost_batch(source, *batch);
+      scan.release(batch);
+    }
+  }
+
+  void read_cost_batch(const std::string& source, const EventBatch& batch) {
+    // Three passes so the scattered memory reads of neighbouring rows overlap: hash every id and
+    // prefetch its index slot, then look every id up and prefetch its cost history, then read.
+    const std::size_t n = batch.rows.size();
+    hashes_.resize(n);
+    assets_.resize(n);
+    for (std::size_t i = 0; i < n; ++i) {
+      hashes_[i] = fleet::AssetIndex::hash(batch.id(batch.rows[i]));
+      index_.prefetch(hashes_[i]);
+    }
+    for (std::size_t i = 0; i < n; ++i) {
+      assets_[i] = index_.find(batch.id(batch.rows[i]), hashes_[i]);
+      data_.costs.prefetch(assets_[i]);
+    }
     std::string reason;
-    while (q.step()) {
+    std::int64_t row = batch.first_row - 1;
+    for (std::size_t i = 0; i < n; ++i) {
+      const RawEvent& e = batch.rows[i];
       ++row;
       ++report_.rows_read;
-      const auto ref = [&] {
-        return fmt::format("row {} (asset_id {}, occurred_on {})", row, shown_value(q, 0),
-                           shown_value(q, 1));
+      const auto shown_or_null = [](std::uint8_t type, std::string_view text) {
+        return type == SQLITE_NULL ? std::string("NULL") : shown(text);
       };
-      const auto asset = find_asset(q.text(0), q.is_null(0), reason);
+      const auto ref = [&] {
+        return fmt::format("row {} (asset_id {}, occurred_on {})", row,
+                           shown_or_null(e.id_type, batch.id(e)),
+                           shown_or_null(e.date_type, batch.date(e)));
+      };
+      const auto asset = e.id_type != SQLITE_NULL && assets_[i] != fleet::AssetIndex::npos
+                             ? std::optional<std::uint32_t>(assets_[i])
+                             : find_asset(batch.id(e), e.id_type == SQLITE_NULL, reason);
       if (!asset) { reject(source, ref(), reason); continue; }
-      const auto occurred = date_column(q, 1);
-      if (!occurred) { reject(source, ref(), bad_date(q, 1, "occurred_on")); continue; }
-      if (auto problem = number_problem(q, 2, "amount")) { reject(source, ref(), *problem); continue; }
+      const auto occurred = e.date_type == SQLITE_TEXT ? dates_.parse(batch.date(e)) : std::nullopt;
+      if (!occurred) {
+        reject(source, ref(), fmt::format("occurred_on {} is not a valid date (YYYY-MM-DD)",
+                                          shown_or_null(e.date_type, batch.date(e))));
+        continue;
+      }
+      if (e.amount_type == SQLITE_NULL) { reject(source, ref(), "amount is missing"); continue; }
+      if (e.amount_type != SQLITE_INTEGER && e.amount_type != SQLITE_FLOAT) {
+        reject(source, ref(), fmt::format("amount {} is not a number", shown(batch.amount_text(e))));
+        continue;
+      }
       if (*occurred > data_.as_of) {  // rule (4)
         ++report_.rows_after_as_of;
         continue;
       }
-      switch (data_.costs.add_event(*asset, *occurred, q.real(2))) {
+      switch (data_.costs.add_event(*asset, *occurred, e.amount)) {
         case fleet::EventFate::counted:
         case fleet::EventFate::outside_complete_years:
           break;
@@ -243,7 +299,10 @@ class Reader {
   const review::Policy& policy_;
   FleetData& data_;
   ReadReport report_;
-  IdIndex index_;
+  fleet::AssetIndex index_;
+  DateMemo dates_;
+  std::vector<std::uint64_t> hashes_;  // per row of the batch being read
+  std::vector<std::uint32_t> assets_;
   IdSet rejected_ids_;
 };
 

@@ -1,7 +1,9 @@
 // Writing one review's results (see results_writer.h).
 #include "db/results_writer.h"
 
+#include <algorithm>
 #include <optional>
+#include <vector>
 
 #include "core/version.h"
 
@@ -149,7 +151,15 @@ void insert_assets(Connection& db, std::int64_t run_id, const review::FleetData&
               "marginal_cost_next_year, replace_after_years, verdict, reason, basis) VALUES "
               "(?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, ?9, ?10, ?11, ?12, ?13, ?14, ?15, ?16, ?17, "
               "?18, ?19, ?20, ?21, ?22)");
-  for (const review::AssetReview& r : result.assets) {
+  // In asset_id order, so the primary-key index grows at its end instead of everywhere.
+  std::vector<const review::AssetReview*> order;
+  order.reserve(result.assets.size());
+  for (const review::AssetReview& r : result.assets) order.push_back(&r);
+  std::sort(order.begin(), order.end(), [&data](const auto* a, const auto* b) {
+    return data.assets[a->asset].asset_id < data.assets[b->asset].asset_id;
+  });
+  for (const review::AssetReview* review : order) {
+    const review::AssetReview& r = *review;
     const review::AssetRecord& record = data.assets[r.asset];
     const review::DefenderInputs& in = r.inputs;
     q.bind(1, run_id);

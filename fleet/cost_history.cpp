@@ -10,7 +10,8 @@
 
 namespace tenure::fleet {
 
-CostHistory::CostHistory(Date as_of, Rate cost_escalation) : escalation_(as_of, cost_escalation) {}
+CostHistory::CostHistory(Date as_of, Rate cost_escalation)
+    : escalation_(as_of, cost_escalation), factor_day_(as_of) {}
 
 CostHistory::AssetIndex CostHistory::add_asset(Date in_service, std::optional<Date> retired_on) {
   if (retired_on && *retired_on < in_service) {
@@ -44,8 +45,11 @@ EventFate CostHistory::add_event(AssetIndex asset, Date occurred_on, Money amoun
   // Rule (1) also bounds events after the as-of date: their age-year ends after it.
   const int k = completed_years(e.in_service, occurred_on) + 1;
   if (k > e.complete_years) return EventFate::outside_complete_years;
-  costs_[e.first_slot + static_cast<std::size_t>(k - 1)] +=
-      escalation_.restate(occurred_on, amount);
+  if (occurred_on != factor_day_) {
+    factor_day_ = occurred_on;
+    factor_ = escalation_.factor(occurred_on);
+  }
+  costs_[e.first_slot + static_cast<std::size_t>(k - 1)] += amount * factor_;
   return EventFate::counted;
 }
 

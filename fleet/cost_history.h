@@ -53,6 +53,13 @@ class CostHistory {
 
   // Rules (2) and (3). Throws InputError naming "asset" for an index add_asset did not return.
   EventFate add_event(AssetIndex asset, Date occurred_on, Money amount);
+  // Starts loading what add_event will read for `asset`, so a batch of events can overlap its
+  // memory reads (the assets of consecutive events are scattered over the whole fleet).
+  void prefetch(AssetIndex asset) const noexcept {
+    if (asset < assets_.size()) {
+      __builtin_prefetch(&assets_[asset]);
+    }
+  }
 
   Date as_of() const { return escalation_.as_of(); }
   const Escalation& escalation() const { return escalation_; }
@@ -72,6 +79,10 @@ class CostHistory {
   const Entry& entry(AssetIndex asset) const;
 
   Escalation escalation_;
+  // Events arrive in date order, so consecutive ones mostly share a day: its restatement factor
+  // is computed once per day, not once per event.
+  Date factor_day_;
+  double factor_ = 1.0;
   std::vector<Entry> assets_;
   std::vector<Money> costs_;  // every asset's complete years, back to back
 };

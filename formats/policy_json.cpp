@@ -66,7 +66,7 @@ review::ClassPolicy read_class(const JsonObject& c) {
 }
 
 review::Detail read_detail(const JsonObject& root) {
-  if (!root.has("detail")) return review::Detail::due;
+  if (!root.has("detail")) return review::Detail::none;
   const std::string text = root.string("detail");
   if (text == "none") return review::Detail::none;
   if (text == "due") return review::Detail::due;

@@ -6,8 +6,8 @@
 //       "depreciation": {"method": "macrs", "recovery_years": 5},
 //       "market_value": {"annual_decline": 0.18}, "cost_model": "auto"}}})");
 //
-// Keys beyond SPEC 4 (ours): "detail": "none" | "due" | "all" (default "due"), which assets keep
-// their year-by-year tables in the results.
+// Keys beyond SPEC 4 (ours): "detail": "none" | "due" | "all" (default "none"), which assets keep
+// their year-by-year tables (EUAC curves, cash flows) in the results; explain recomputes any.
 #pragma once
 
 #include <string_view>

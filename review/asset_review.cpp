@@ -99,7 +99,8 @@ AssetReview judge(std::size_t asset, DefenderInputs inputs, const ClassModel& mo
                            model.note);
     return r;
   }
-  r.defender = replacement::analyse_asset(r.inputs.ownership, rates);
+  r.defender = std::make_unique<replacement::AssetAnalysis>(
+      replacement::analyse_asset(r.inputs.ownership, rates));
   r.decision = replacement::decide(*r.defender, *model.challenger, rates);
   const replacement::Decision& d = *r.decision;
   r.defender_euac_before_tax = r.defender->before_tax.curve.best_euac;

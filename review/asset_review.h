@@ -7,6 +7,7 @@
 //   r.reason;    // "Review: at 9 years it is past the class's economic life of 7 years; ..."
 #pragma once
 
+#include <memory>
 #include <optional>
 #include <string>
 #include <vector>
@@ -42,8 +43,9 @@ struct AssetReview {
   std::optional<Money> defender_euac_before_tax;
   std::optional<Money> defender_euac_after_tax;
   std::optional<Money> marginal_cost_next_year;  // on the basis
-  // Present when the class could be analysed (it has a cost curve).
-  std::optional<replacement::AssetAnalysis> defender;
+  // Present when the class could be analysed (it has a cost curve) and the detail is kept; held
+  // by pointer so a fleet's summaries stay small.
+  std::unique_ptr<replacement::AssetAnalysis> defender;
   std::optional<replacement::Decision> decision;
   std::optional<Years> class_esl_years;  // the class challenger's ESL on the basis
 

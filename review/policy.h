@@ -32,13 +32,15 @@ struct Sources {
   std::string valuations = "asset_valuation";
 };
 
-// Which assets keep their year-by-year tables (EUAC curve, cash flows) in the results: every
-// asset's summary row is always kept, and `tenure explain` can recompute any asset's tables.
+// Which assets keep their year-by-year tables (EUAC curves, cash flows) in the results besides
+// each class challenger's: every asset's summary row is always kept, and `tenure explain` and
+// the report recompute any asset's tables exactly, so the default keeps none (a fleet's nightly
+// write stays small); "due" or "all" keep them for SQL users.
 enum class Detail { none, due, all };
 
 struct Policy {
   tax::Rates rates;
-  Detail detail = Detail::due;
+  Detail detail = Detail::none;
   Rate cost_escalation = 0;    // restates past costs into as-of-year money (then marr is real)
   double review_margin = 0.05; // |D - C| <= margin * C puts an asset under review
   Sources sources;

@@ -9,7 +9,8 @@ export DEBIAN_FRONTEND=noninteractive
 apt-get update -qq
 apt-get install -y -qq --no-install-recommends \
   cmake make g++ pkg-config sqlite3 libsqlite3-dev libboost-date-time-dev nlohmann-json3-dev \
-  libgtest-dev libgmock-dev libcli11-dev libfmt-dev libbenchmark-dev libssl-dev >/dev/null
+  libgtest-dev libgmock-dev libcli11-dev libfmt-dev libbenchmark-dev libssl-dev valgrind \
+  time bc >/dev/null
 if ! command -v node >/dev/null 2>&1 || ! command -v npm >/dev/null 2>&1; then
   apt-get install -y -qq --no-install-recommends nodejs npm >/dev/null
 fi
