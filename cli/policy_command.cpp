@@ -27,13 +27,13 @@ void check(const PolicyOptions& o, const Console& console) {
 void set(const PolicyOptions& o, const Console& console) {
   const std::string text = read_input_file(o.file, console.in);
   formats::read_policy(text);  // refuse a bad policy before storing it
-  db::Connection db = db::Connection::open(o.db);
+  db::Connection db = db::Connection::open_existing(o.db, "--db");
   const auto id = db::store_policy(db, text);
   console.out << fmt::format("stored policy {} in {}\n", id, o.db);
 }
 
 void show(const PolicyOptions& o, const Console& console) {
-  db::Connection db = db::Connection::open(o.db);
+  db::Connection db = db::Connection::open_existing(o.db, "--db");
   const auto text = db::latest_policy(db);
   if (!text) throw InputError("--db", "no policy is stored in '" + o.db + "'");
   console.out << *text;

@@ -76,7 +76,7 @@ void run(const ReviewCommandOptions& o, const Console& console) {
       if (done == total) console.err << '\n';
     };
   }
-  db::Connection db = db::Connection::open(o.db);
+  db::Connection db = db::Connection::open_existing(o.db, "--db");
   const db::RunSummary summary = db::run_review(db, options);
   if (o.format == "json") {
     console.out << summary_json(summary).dump(2) << '\n';

@@ -1,6 +1,7 @@
 // RAII over the SQLite C API (see connection.h).
 #include "db/connection.h"
 
+#include <filesystem>
 #include <string>
 
 #include "core/errors.h"
@@ -9,7 +10,7 @@ namespace tenure::db {
 
 Connection Connection::open(const std::string& path, bool create) {
   sqlite3* handle = nullptr;
-  const int flags = SQLITE_OPEN_READWRITE | (create ? SQLITE_OPEN_CREATE : 0);
+  const int flags = SQLITE_OPEN_READWRITE | SQLITE_OPEN_URI | (create ? SQLITE_OPEN_CREATE : 0);
   const int rc = sqlite3_open_v2(path.c_str(), &handle, flags, nullptr);
   if (rc != SQLITE_OK) {
     std::string message = handle ? sqlite3_errmsg(handle) : sqlite3_errstr(rc);
@@ -19,6 +20,13 @@ Connection Connection::open(const std::string& path, bool create) {
   sqlite3_busy_timeout(handle, kBusyTimeoutMs);
   sqlite3_extended_result_codes(handle, 1);
   return Connection(handle, true);
+}
+
+Connection Connection::open_existing(const std::string& path, const std::string& option) {
+  if (!path.starts_with("file:") && !std::filesystem::exists(path)) {
+    throw InputError(option, "no database file '" + path + "'");
+  }
+  return open(path);
 }
 
 Connection Connection::borrow(sqlite3* handle) { return Connection(handle, false); }

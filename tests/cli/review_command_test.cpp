@@ -1,0 +1,96 @@
+// `tenure demo`, `tenure review` and `tenure policy` as a user runs them: exit codes (0 done,
+// 1 failure, 2 bad input), the one-line error messages, the JSON summary, and the stored policy.
+#include <gtest/gtest.h>
+
+#include <filesystem>
+
+#include <nlohmann/json.hpp>
+
+#include "run_tenure.h"
+
+namespace tenure::cli::testing {
+namespace {
+
+class ReviewCommand : public ::testing::Test {
+ protected:
+  void SetUp() override {
+    const cli::testing::Run demo = run_tenure({"demo", "--db", db, "--assets", "120", "--events", "12000"});
+    ASSERT_EQ(demo.exit_code, 0) << demo.err;
+  }
+  TempDir dir;
+  std::string db = dir.path("fleet.db");
+};
+
+TEST_F(ReviewCommand, ReviewsTheDemoFleetAndSummarisesAsJson) {
+  const cli::testing::Run r = run_tenure({"review", "--db", db, "--as-of", "2026-11-30", "--format", "json"});
+  ASSERT_EQ(r.exit_code, 0) << r.err;
+  const auto summary = nlohmann::json::parse(r.out);
+  EXPECT_EQ(summary.at("run_id"), 1);
+  EXPECT_EQ(summary.at("as_of"), "2026-11-30");
+  EXPECT_EQ(summary.at("basis"), "after_tax");
+  EXPECT_EQ(summary.at("money"), "real");
+  EXPECT_GT(summary.at("rows_rejected").get<int>(), 0);  // the demo's bad rows
+  EXPECT_EQ(summary.at("keep").get<int>() + summary.at("review").get<int>() +
+                summary.at("replace").get<int>(),
+            summary.at("assets_reviewed").get<int>());
+  EXPECT_EQ(summary.at("newly_due"), summary.at("due"));  // the first run: all due is new
+}
+
+TEST_F(ReviewCommand, TableSummaryEndsWithTheCaution) {
+  const cli::testing::Run r = run_tenure({"review", "--db", db, "--as-of", "2026-11-30"});
+  ASSERT_EQ(r.exit_code, 0) << r.err;
+  EXPECT_NE(r.out.find("newly due"), std::string::npos);
+  EXPECT_NE(r.out.find("not tax, accounting or legal advice"), std::string::npos);
+}
+
+TEST_F(ReviewCommand, BadPolicyFileIsExitTwoNamingTheJsonPath) {
+  const std::string policy = dir.write("bad.json", R"({"marr": 0.1, "income_tax_rate": 1.5, "classes": {}})");
+  const cli::testing::Run r = run_tenure({"review", "--db", db, "--policy", policy});
+  EXPECT_EQ(r.exit_code, 2);
+  EXPECT_EQ(r.err, "tenure review: $.income_tax_rate: must be in [0, 1)\n");
+}
+
+TEST_F(ReviewCommand, BadAsOfDateIsExitTwo) {
+  const cli::testing::Run r = run_tenure({"review", "--db", db, "--as-of", "2026-02-30"});
+  EXPECT_EQ(r.exit_code, 2);
+  EXPECT_EQ(r.err, "tenure review: --as-of: '2026-02-30' is not a valid date (YYYY-MM-DD)\n");
+}
+
+TEST_F(ReviewCommand, MissingDatabaseFileIsExitTwo) {
+  const cli::testing::Run r = run_tenure({"review", "--db", dir.path("nowhere.db")});
+  EXPECT_EQ(r.exit_code, 2);
+  EXPECT_NE(r.err.find("--db: no database file"), std::string::npos) << r.err;
+  EXPECT_FALSE(std::filesystem::exists(dir.path("nowhere.db")));
+}
+
+TEST_F(ReviewCommand, ReadOnlyDatabaseIsExitOneAndChangesNothing) {
+  std::filesystem::permissions(db, std::filesystem::perms::owner_read | std::filesystem::perms::group_read);
+  const std::string before = slurp(db);
+  // As root the file mode does not stop writes, so open it read-only through SQLite's URI.
+  const cli::testing::Run r = run_tenure({"review", "--db", "file:" + db + "?mode=ro", "--as-of", "2026-11-30"});
+  EXPECT_EQ(r.exit_code, 1) << r.out;
+  EXPECT_NE(r.err.find("tenure review: "), std::string::npos);
+  EXPECT_EQ(slurp(db), before);
+}
+
+TEST_F(ReviewCommand, PolicySetShowAndCheck) {
+  const std::string policy = dir.write("p.json",
+      "// invented\n{\"marr\": 0.08, \"income_tax_rate\": 0,\n \"classes\": {\"van-service\": {"
+      "\"challenger_first_cost\": 40000, \"max_life_years\": 12,"
+      "\"depreciation\": {\"method\": \"none\"}, \"market_value\": {\"annual_decline\": 0.2}}}}\n");
+  EXPECT_EQ(run_tenure({"policy", "check", policy}).exit_code, 0);
+  const cli::testing::Run set = run_tenure({"policy", "set", "--db", db, policy});
+  ASSERT_EQ(set.exit_code, 0) << set.err;
+  EXPECT_EQ(run_tenure({"policy", "show", "--db", db}).out, slurp(policy));
+  // The stored policy has no class for most demo assets: they are rejected, the run goes on.
+  const cli::testing::Run r = run_tenure({"review", "--db", db, "--as-of", "2026-11-30", "--format", "json"});
+  ASSERT_EQ(r.exit_code, 0) << r.err;
+  EXPECT_EQ(nlohmann::json::parse(r.out).at("basis"), "before_tax");
+  const std::string bad = dir.write("typo.json", R"({"marr": 0.08, "income_tax_rat": 0, "classes": {}})");
+  const cli::testing::Run refused = run_tenure({"policy", "set", "--db", db, bad});
+  EXPECT_EQ(refused.exit_code, 2);
+  EXPECT_NE(refused.err.find("$.income_tax_rat: unknown key"), std::string::npos) << refused.err;
+}
+
+}  // namespace
+}  // namespace tenure::cli::testing
