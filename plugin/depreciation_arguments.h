@@ -1,0 +1,36 @@
+// The depreciation method of a SQL call, shared by tenure_depreciation and tenure_book_value: the
+// arguments method, basis, salvage, life, rate and switch_to_straight_line become a depreciation
+// schedule, through the case file's depreciation reader, so SQL accepts what a case file accepts.
+//
+//   method                 straight_line, declining_balance, sum_of_years_digits, macrs, none
+//   basis                  > 0, always required
+//   salvage                >= 0 and <= basis; required by the book methods; for macrs and none
+//                          it must be 0 or NULL (MACRS recovers the whole basis)
+//   life                   whole years >= 1; for macrs the recovery period (3, 5, 7, 10, 15, 20);
+//                          must be NULL for none
+//   rate                   declining_balance only: multiple of the straight-line rate (2 = double)
+//   switch_to_straight_line  declining_balance only: 1 to switch when straight line deducts
+//                          more, 0 never to switch
+// An argument a method does not use must be NULL or left out ("... is not used by method macrs").
+//
+//   const Signature s{"tenure_book_value", {"method", "basis", ...}, kDepreciationAliases};
+//   depreciation::Schedule schedule = schedule_from(Arguments(s, argc, argv));
+#pragma once
+
+#include <string_view>
+#include <utility>
+#include <vector>
+
+#include "depreciation/schedule.h"
+#include "plugin/sql_arguments.h"
+
+namespace tenure::plugin {
+
+// Engine field names and the SQL arguments they are about.
+inline const std::vector<std::pair<std::string_view, std::string_view>> kDepreciationAliases = {
+    {"life_years", "life"}, {"recovery_years", "life"}, {"disposal_year", "dispose_in_year"}};
+
+// The schedule the arguments describe; throws InputError naming the argument and the rule.
+depreciation::Schedule schedule_from(const Arguments& args);
+
+}  // namespace tenure::plugin
