@@ -10,7 +10,10 @@ namespace tenure::db {
 
 Connection Connection::open(const std::string& path, bool create) {
   sqlite3* handle = nullptr;
-  const int flags = SQLITE_OPEN_READWRITE | SQLITE_OPEN_URI | (create ? SQLITE_OPEN_CREATE : 0);
+  // NOMUTEX: a connection tenure opens is used by one thread at a time (the cost-event scan
+  // hands it to its thread and back), so SQLite need not lock it on every call.
+  const int flags = SQLITE_OPEN_READWRITE | SQLITE_OPEN_URI | SQLITE_OPEN_NOMUTEX |
+                    (create ? SQLITE_OPEN_CREATE : 0);
   const int rc = sqlite3_open_v2(path.c_str(), &handle, flags, nullptr);
   if (rc != SQLITE_OK) {
     std::string message = handle ? sqlite3_errmsg(handle) : sqlite3_errstr(rc);

@@ -85,8 +85,14 @@ std::string shown_value(const Statement& q, int column) {
   return shown(q.text(column));
 }
 
-// Rule (1)-(3) numbers: finite, and stored as a number (text that SQLite could not convert stays
-// text, and is refused rather than read as 0).
+// An amount of rules (1)-(3) beyond kMaxAmount, or nullopt.
+std::optional<std::string> magnitude_problem(double amount, const char* name) {
+  if (std::abs(amount) <= kMaxAmount) return std::nullopt;
+  return fmt::format("{} {} is larger in magnitude than {:g}", name, amount, kMaxAmount);
+}
+
+// Rule (1)-(3) amounts: stored as a number (text that SQLite could not convert stays text, and
+// is refused rather than read as 0), finite and within kMaxAmount.
 std::optional<std::string> number_problem(const Statement& q, int column, const char* name) {
   const int type = q.column_type(column);
   if (type == SQLITE_NULL) return fmt::format("{} is missing", name);
@@ -94,7 +100,7 @@ std::optional<std::string> number_problem(const Statement& q, int column, const 
     return fmt::format("{} {} is not a number", name, shown_value(q, column));
   }
   if (!std::isfinite(q.real(column))) return fmt::format("{} is not a finite number", name);
-  return std::nullopt;
+  return magnitude_problem(q.real(column), name);
 }
 
 std::optional<Date> date_column(const Statement& q, int column) {
@@ -193,11 +199,13 @@ class Reader {
   }
 
   void read_cost_batch(const std::string& source, const EventBatch& batch) {
-    // Three passes so the scattered memory reads of neighbouring rows overlap: hash every id and
-    // prefetch its index slot, then look every id up and prefetch its cost history, then read.
+    // Passes over the whole batch so the scattered memory reads of neighbouring rows overlap:
+    // hash every id and prefetch its index slot; look every id up and prefetch its cost history;
+    // parse every date and prefetch the year total it adds to; then read the rows in order.
     const std::size_t n = batch.rows.size();
     hashes_.resize(n);
     assets_.resize(n);
+    days_.resize(n);
     for (std::size_t i = 0; i < n; ++i) {
       hashes_[i] = fleet::AssetIndex::hash(batch.id(batch.rows[i]));
       index_.prefetch(hashes_[i]);
@@ -205,6 +213,11 @@ class Reader {
     for (std::size_t i = 0; i < n; ++i) {
       assets_[i] = index_.find(batch.id(batch.rows[i]), hashes_[i]);
       data_.costs.prefetch(assets_[i]);
+    }
+    for (std::size_t i = 0; i < n; ++i) {
+      const RawEvent& e = batch.rows[i];
+      days_[i] = e.date_type == SQLITE_TEXT ? dates_.parse(batch.date(e)) : std::nullopt;
+      if (days_[i]) data_.costs.prefetch(assets_[i], *days_[i]);
     }
     std::string reason;
     std::int64_t row = batch.first_row - 1;
@@ -224,7 +237,7 @@ class Reader {
                              ? std::optional<std::uint32_t>(assets_[i])
                              : find_asset(batch.id(e), e.id_type == SQLITE_NULL, reason);
       if (!asset) { reject(source, ref(), reason); continue; }
-      const auto occurred = e.date_type == SQLITE_TEXT ? dates_.parse(batch.date(e)) : std::nullopt;
+      const std::optional<Date>& occurred = days_[i];
       if (!occurred) {
         reject(source, ref(), fmt::format("occurred_on {} is not a valid date (YYYY-MM-DD)",
                                           shown_or_null(e.date_type, batch.date(e))));
@@ -234,6 +247,12 @@ class Reader {
       if (e.amount_type != SQLITE_INTEGER && e.amount_type != SQLITE_FLOAT) {
         reject(source, ref(), fmt::format("amount {} is not a number", shown(batch.amount_text(e))));
         continue;
+      }
+      if (std::isfinite(e.amount)) {
+        if (auto problem = magnitude_problem(e.amount, "amount")) {
+          reject(source, ref(), *problem);
+          continue;
+        }
       }
       if (*occurred > data_.as_of) {  // rule (4)
         ++report_.rows_after_as_of;
@@ -303,6 +322,7 @@ class Reader {
   DateMemo dates_;
   std::vector<std::uint64_t> hashes_;  // per row of the batch being read
   std::vector<std::uint32_t> assets_;
+  std::vector<std::optional<Date>> days_;
   IdSet rejected_ids_;
 };
 

@@ -53,6 +53,15 @@ EventFate CostHistory::add_event(AssetIndex asset, Date occurred_on, Money amoun
   return EventFate::counted;
 }
 
+void CostHistory::prefetch(AssetIndex asset, Date occurred_on) const noexcept {
+  if (asset >= assets_.size()) return;
+  const Entry& e = assets_[asset];
+  const int k = completed_years(e.in_service, occurred_on) + 1;
+  if (k >= 1 && k <= e.complete_years) {
+    __builtin_prefetch(&costs_[e.first_slot + static_cast<std::size_t>(k - 1)], 1);
+  }
+}
+
 std::span<const Money> CostHistory::year_costs(AssetIndex asset) const {
   const Entry& e = entry(asset);
   return {costs_.data() + e.first_slot, static_cast<std::size_t>(e.complete_years)};

@@ -60,6 +60,8 @@ class CostHistory {
       __builtin_prefetch(&assets_[asset]);
     }
   }
+  // Then, once that has arrived, the total the event on `occurred_on` will add to.
+  void prefetch(AssetIndex asset, Date occurred_on) const noexcept;
 
   Date as_of() const { return escalation_.as_of(); }
   const Escalation& escalation() const { return escalation_; }

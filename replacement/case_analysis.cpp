@@ -18,7 +18,7 @@ AssetAnalysis analyse_asset(const Ownership& asset, const tax::Rates& rates) {
   AssetAnalysis result{{std::move(before), std::move(before_curve)}, std::nullopt,
                        after_tax_table(asset, rates)};
   if (rates.after_tax()) {
-    KeepingCosts after = after_tax_keeping_costs(asset, rates);
+    KeepingCosts after = after_tax_keeping_costs(result.table, rates.after_tax_marr);
     LifeCurve after_curve = life_curve(after);
     result.after_tax = BasisAnalysis{std::move(after), std::move(after_curve)};
   }

@@ -66,13 +66,16 @@ AfterTaxTable after_tax_table(const Ownership& asset, const tax::Rates& rates) {
 }
 
 KeepingCosts after_tax_keeping_costs(const Ownership& asset, const tax::Rates& rates) {
+  return after_tax_keeping_costs(after_tax_table(asset, rates), rates.after_tax_marr);
+}
+
+KeepingCosts after_tax_keeping_costs(const AfterTaxTable& table, Rate after_tax_marr) {
   // PWcost(n) = start - sum_{k<n} ATCF_k (P/F,k) - (ATCF'_n + net sale_n) (P/F,n), where the
   // last year kept takes the disposal-year deduction (ATCF'_n) and is followed by the sale.
-  const AfterTaxTable table = after_tax_table(asset, rates);
-  const Rate i = rates.after_tax_marr;
+  const Rate i = after_tax_marr;
   std::vector<Money> pw{0.0};
   Money kept_so_far = table.start.net_proceeds;  // PW of costs of the years kept past their end
-  for (Years n = 1; n <= asset.max_years(); ++n) {
+  for (Years n = 1; n <= static_cast<Years>(table.years.size()); ++n) {
     const AfterTaxYear& year = table.years[static_cast<std::size_t>(n - 1)];
     const double discount = interest::pf(i, n);
     pw.push_back(kept_so_far - (year.sold.after_tax_cash_flow + year.sale.net_proceeds) * discount);

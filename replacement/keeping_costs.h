@@ -54,4 +54,7 @@ struct AfterTaxTable {
 };
 AfterTaxTable after_tax_table(const Ownership& asset, const tax::Rates& rates);
 
+// The same keeping costs from a table already built (saves building it twice).
+KeepingCosts after_tax_keeping_costs(const AfterTaxTable& table, Rate after_tax_marr);
+
 }  // namespace tenure::replacement

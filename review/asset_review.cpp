@@ -59,7 +59,7 @@ replacement::Ownership defender_ownership(const ClassModel& model, Money first_c
   own.first_cost = first_cost;
   own.age_years = age;
   own.value_now = market_value_now;
-  own.depreciation = depreciation::make_method(model.policy->depreciation);
+  own.depreciation = model.depreciation;
   if (model.cost_curve) {
     const Years remaining = std::max(1, model.policy->max_life_years - age);
     for (Years k = 1; k <= remaining; ++k) {
@@ -90,10 +90,10 @@ AssetReview judge(std::size_t asset, DefenderInputs inputs, const ClassModel& mo
   r.inputs = std::move(inputs);
   r.verdict = Verdict::review;
   r.basis = rates.after_tax() ? replacement::Basis::after_tax : replacement::Basis::before_tax;
-  r.book_value_now = depreciation::Schedule(*r.inputs.ownership.depreciation,
-                                            r.inputs.ownership.first_cost)
-                         .book_value(r.inputs.age_years);
   if (!model.challenger) {
+    r.book_value_now = depreciation::Schedule(*r.inputs.ownership.depreciation,
+                                              r.inputs.ownership.first_cost)
+                           .book_value(r.inputs.age_years);
     r.reason = fmt::format("Review: {}; tenure cannot weigh this asset until the class has a "
                            "complete year of costs.",
                            model.note);
@@ -101,6 +101,7 @@ AssetReview judge(std::size_t asset, DefenderInputs inputs, const ClassModel& mo
   }
   r.defender = std::make_unique<replacement::AssetAnalysis>(
       replacement::analyse_asset(r.inputs.ownership, rates));
+  r.book_value_now = r.defender->table.start.book_value;
   r.decision = replacement::decide(*r.defender, *model.challenger, rates);
   const replacement::Decision& d = *r.decision;
   r.defender_euac_before_tax = r.defender->before_tax.curve.best_euac;

@@ -15,8 +15,15 @@ Money ClassModel::cost_at(Years age_year, double factor) const {
 ClassModel make_class_model(const std::string& asset_class, const ClassPolicy& policy,
                             std::size_t assets, std::optional<fleet::CostCurve> cost_curve,
                             fleet::ValueCurve value_curve, const tax::Rates& rates) {
-  ClassModel model{asset_class,           &policy,      assets, std::move(cost_curve),
-                   std::move(value_curve), std::nullopt, std::nullopt, {}};
+  ClassModel model{asset_class,
+                   &policy,
+                   assets,
+                   depreciation::make_method(policy.depreciation),
+                   std::move(cost_curve),
+                   std::move(value_curve),
+                   std::nullopt,
+                   std::nullopt,
+                   {}};
   if (!model.cost_curve) {
     model.note = fmt::format("no complete year of cost history for class '{}', so its costs "
                              "cannot be estimated",
@@ -34,7 +41,7 @@ ClassModel make_class_model(const std::string& asset_class, const ClassPolicy& p
     challenger.market_values.push_back(policy.challenger_first_cost *
                                        model.value_curve.fraction_at(k));
   }
-  challenger.depreciation = depreciation::make_method(policy.depreciation);
+  challenger.depreciation = model.depreciation;
   if (clamped) {
     model.note = "the fitted cost curve falls below zero within the class's maximum life; "
                  "those years are read as zero cost";

@@ -8,6 +8,7 @@
 //   if (vans.challenger) vans.challenger->on(Basis::after_tax).curve.best_years;
 #pragma once
 
+#include <memory>
 #include <optional>
 #include <string>
 #include <vector>
@@ -24,6 +25,7 @@ struct ClassModel {
   std::string asset_class;
   const ClassPolicy* policy;
   std::size_t assets;                          // accepted assets of the class, retired included
+  std::shared_ptr<const depreciation::Method> depreciation;  // the policy's, made once
   std::optional<fleet::CostCurve> cost_curve;  // none without a complete cost year
   fleet::ValueCurve value_curve;
   std::optional<replacement::Ownership> challenger_input;
