@@ -33,6 +33,10 @@ Date today_utc() {
 
 RunSummary run_review(Connection& db, const ReviewOptions& options) {
   const std::string started_at = now_utc_iso();
+  using Clock = std::chrono::steady_clock;
+  const auto seconds_since = [](Clock::time_point start) {
+    return std::chrono::duration<double>(Clock::now() - start).count();
+  };
   std::string policy_text;
   if (options.policy_json) {
     policy_text = *options.policy_json;
@@ -47,6 +51,7 @@ RunSummary run_review(Connection& db, const ReviewOptions& options) {
 
   review::FleetData data(as_of, policy.cost_escalation);
   ReadReport report;
+  const auto read_start = Clock::now();
   {
     // One read transaction: a consistent snapshot of the three relations.
     Transaction snapshot(db, Transaction::Kind::deferred);
@@ -54,9 +59,12 @@ RunSummary run_review(Connection& db, const ReviewOptions& options) {
     report = read_fleet(db, policy, data);
     snapshot.commit();
   }
-  const review::ReviewResult result = review::review_fleet(data, policy, options.progress);
-
   RunSummary summary;
+  summary.read_seconds = seconds_since(read_start);
+  const auto compute_start = Clock::now();
+  const review::ReviewResult result = review::review_fleet(data, policy, options.progress);
+  summary.compute_seconds = seconds_since(compute_start);
+  const auto write_start = Clock::now();
   {
     Transaction tx(db, Transaction::Kind::immediate);
     migrate(db);
@@ -65,6 +73,7 @@ RunSummary run_review(Connection& db, const ReviewOptions& options) {
     if (options.before_commit) options.before_commit();
     tx.commit();
   }
+  summary.write_seconds = seconds_since(write_start);
   summary.as_of = as_of.to_iso();
   summary.rows_read = report.rows_read;
   summary.rows_rejected = static_cast<std::int64_t>(report.rejected.size());
