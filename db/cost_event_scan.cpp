@@ -6,14 +6,18 @@
 namespace tenure::db {
 namespace {
 
-// Appends a column's text (SQLite's text form of any storage class) to the batch arena.
-void copy_text(sqlite3_stmt* s, int column, std::string& arena, std::uint32_t& offset,
+// Appends a column's text (SQLite's text form of any storage class) to the batch arena; false
+// for NULL (sqlite3_column_text returns a null pointer only then, memory permitting).
+bool copy_text(sqlite3_stmt* s, int column, std::string& arena, std::uint32_t& offset,
                std::uint32_t& length) {
   const auto* p = reinterpret_cast<const char*>(sqlite3_column_text(s, column));
-  const auto n = static_cast<std::size_t>(sqlite3_column_bytes(s, column));
   offset = static_cast<std::uint32_t>(arena.size());
-  length = static_cast<std::uint32_t>(p ? n : 0);
-  if (p) arena.append(p, n);
+  length = 0;
+  if (!p) return false;
+  const auto n = static_cast<std::size_t>(sqlite3_column_bytes(s, column));
+  length = static_cast<std::uint32_t>(n);
+  arena.append(p, n);
+  return true;
 }
 
 }  // namespace
@@ -60,11 +64,12 @@ void CostEventScan::produce() {
       while (batch->rows.size() < kBatchRows && (more = statement_.step())) {
         ++row;
         RawEvent e{};
-        e.id_type = static_cast<std::uint8_t>(sqlite3_column_type(s, 0));
-        e.date_type = static_cast<std::uint8_t>(sqlite3_column_type(s, 1));
+        // Ids and dates are read as text whatever their storage class (an id stored as a number
+        // is its text; a date stored as a number never parses), so only NULL matters for them.
+        e.id_type = copy_text(s, 0, batch->text, e.id_offset, e.id_length) ? SQLITE_TEXT : SQLITE_NULL;
+        e.date_type =
+            copy_text(s, 1, batch->text, e.date_offset, e.date_length) ? SQLITE_TEXT : SQLITE_NULL;
         e.amount_type = static_cast<std::uint8_t>(sqlite3_column_type(s, 2));
-        copy_text(s, 0, batch->text, e.id_offset, e.id_length);
-        copy_text(s, 1, batch->text, e.date_offset, e.date_length);
         if (e.amount_type == SQLITE_INTEGER || e.amount_type == SQLITE_FLOAT) {
           e.amount = sqlite3_column_double(s, 2);
         } else {

@@ -25,7 +25,8 @@
 
 namespace tenure::db {
 
-// One row as read: SQLite storage classes (SQLITE_INTEGER, ...) and where its text is kept.
+// One row as read: where its text is kept, SQLITE_TEXT or SQLITE_NULL for the id and the date,
+// and the amount's storage class (SQLITE_INTEGER, SQLITE_FLOAT, ...).
 struct RawEvent {
   std::uint32_t id_offset;
   std::uint32_t id_length;
