@@ -25,6 +25,8 @@ void add_commands(CLI::App& app, const Console& console) {
   add_demo_command(app, console);
   add_review_command(app, console);
   add_policy_command(app, console);
+  add_explain_command(app, console);
+  add_report_command(app, console);
 }
 
 }  // namespace tenure::cli

@@ -38,5 +38,9 @@ void add_demo_command(CLI::App& app, const Console& console);
 void add_review_command(CLI::App& app, const Console& console);
 // tenure policy check FILE | set --db PATH FILE | show --db PATH
 void add_policy_command(CLI::App& app, const Console& console);
+// tenure explain --db PATH ASSET [--run N] [--format text|json]
+void add_explain_command(CLI::App& app, const Console& console);
+// tenure report --db PATH --out FILE.html [--run N]
+void add_report_command(CLI::App& app, const Console& console);
 
 }  // namespace tenure::cli

@@ -1,0 +1,93 @@
+// `tenure report --db PATH --out FILE.html [--run N]`: one self-contained static HTML page about
+// a stored run (SPEC 8): the fleet by verdict, per class its EUAC curves and ages against its
+// economic life, the due list with reasons and a marginal-cost chart per due asset.
+#include <cstdio>
+#include <fstream>
+#include <memory>
+#include <optional>
+#include <string>
+
+#include <fmt/format.h>
+
+#include "cli/commands.h"
+#include "core/errors.h"
+#include "db/run_reader.h"
+#include "formats/text_table.h"
+#include "report/report_page.h"
+
+namespace tenure::cli {
+namespace {
+
+struct ReportOptions {
+  std::string db;
+  std::string out;
+  std::optional<std::int64_t> run;
+};
+
+report::ReportData read_report_data(const ReportOptions& o) {
+  db::Connection db = db::Connection::open_existing(o.db, "--db");
+  db::Transaction snapshot(db, db::Transaction::Kind::deferred);
+  report::ReportData data;
+  data.run = db::read_run(db, o.run);
+  const std::int64_t id = data.run.run_id;
+  data.classes = db::read_class_results(db, id);
+  data.assets = db::read_asset_results(db, id);
+  data.challenger_curves = db::read_challenger_curves(db, id);
+  data.rejected = db::read_rejected(db, id, report::kMaxRejectedRows);
+  data.due_before = db::due_in_previous_run(db, id);
+  snapshot.commit();
+  return data;
+}
+
+void run_report(const ReportOptions& o, const Console& console) {
+  const report::ReportData data = read_report_data(o);
+  const std::string html = report::render_report(data);
+  // Written next to the target and renamed over it, so a reader never sees half a page.
+  const std::string partial = o.out + ".partial";
+  {
+    std::ofstream file(partial, std::ios::binary | std::ios::trunc);
+    file << html;
+    file.close();
+    if (!file) throw InputError("--out", "cannot write the file '" + partial + "'");
+  }
+  if (std::rename(partial.c_str(), o.out.c_str()) != 0) {
+    std::remove(partial.c_str());
+    throw InputError("--out", "cannot write the file '" + o.out + "'");
+  }
+  std::size_t due = 0;
+  for (const explain::StoredAsset& a : data.assets) due += a.due() ? 1 : 0;
+  formats::TextTable t({"", ""}, 2);
+  t.add_row({"run", fmt::format("{} as of {}", data.run.run_id, data.run.as_of)});
+  t.add_row({"assets", std::to_string(data.assets.size())});
+  t.add_row({"classes", std::to_string(data.classes.size())});
+  t.add_row({"due", std::to_string(due)});
+  t.add_row({"page", fmt::format("{} ({} KiB)", o.out, (html.size() + 1023) / 1024)});
+  console.out << "tenure report: written\n" << t.render();
+}
+
+}  // namespace
+
+void add_report_command(CLI::App& app, const Console& console) {
+  auto o = std::make_shared<ReportOptions>();
+  CLI::App* command = app.add_subcommand(
+      "report", "A static HTML page with charts of a stored run, for people who sign off a plan");
+  command->add_option("--db", o->db, "the maintenance database (SQLite file)")->required();
+  command->add_option("--out", o->out, "the HTML file to write")->required();
+  command->add_option("--run", o->run, "the run to report; default: the latest successful run")
+      ->type_name("N");
+  command->footer(
+      "One self-contained file: inline styles and SVG charts, no script, nothing fetched from\n"
+      "the network, and a print layout. It shows the fleet by verdict, per class the EUAC of a\n"
+      "new unit before and after tax against years kept with the economic life marked and the\n"
+      "ages of the units in service against it, the due list with reasons, each due asset's\n"
+      "marginal cost of keeping against the new unit's least EUAC, and the rejected input rows.\n"
+      "Exit codes: 0 written, 1 the database cannot be read, 2 bad arguments, no such run or an\n"
+      "output file that cannot be written.\n"
+      "\n"
+      "Examples:\n"
+      "  tenure report --db fleet.db --out review.html\n"
+      "  tenure report --db fleet.db --out run3.html --run 3");
+  command->callback([o, console] { run_report(*o, console); });
+}
+
+}  // namespace tenure::cli

@@ -1,0 +1,298 @@
+// One asset's computation as text: the asset, its class, its own costs and the verdict's rule
+// (see explain_text.h; the year-by-year tables are in analysis_text.cpp).
+#include "explain/explain_text.h"
+
+#include <cmath>
+
+#include <fmt/format.h>
+
+#include "depreciation/schedule.h"
+#include "explain/text_sections.h"
+#include "formats/caution.h"
+#include "formats/depreciation_json.h"
+#include "formats/text_table.h"
+
+namespace tenure::explain {
+namespace text {
+
+using formats::money;
+using formats::percent;
+using formats::TextTable;
+using formats::years;
+
+std::string section(const std::string& title, const std::string& body) {
+  return title + "\n" + body;
+}
+
+std::string depreciation_words(const depreciation::Spec& spec) {
+  const nlohmann::json object = formats::depreciation_to_json(spec);
+  std::string out = object.at("method").get<std::string>();
+  for (const auto& [key, value] : object.items()) {
+    if (key != "method") out += fmt::format(", {} {}", key, value.dump());
+  }
+  return out;
+}
+
+std::string basis_words(replacement::Basis basis) {
+  return basis == replacement::Basis::after_tax ? "after-tax" : "before-tax";
+}
+
+std::string marked(Money amount, bool best) { return money(amount) + (best ? " *" : "  "); }
+
+namespace {
+
+std::string ratio(double value) { return fmt::format("{:.4f}", value); }
+
+const review::ClassPolicy& class_policy(const Explanation& e) { return *e.model.policy; }
+
+// Where the market value now came from, in words with the numbers behind it.
+std::string market_value_words(const Explanation& e) {
+  const StoredAsset& a = e.stored;
+  if (a.market_value_source != "class value curve") {
+    return "its latest valuation within 12 months of the as-of date (" + a.market_value_source + ")";
+  }
+  const fleet::ValueCurve& v = e.model.value_curve;
+  return fmt::format("class value curve: {} x (1 - {})^{} x first cost", ratio(v.value_start),
+                     ratio(v.value_decline), a.age_years);
+}
+
+bool close(double a, double b) {
+  return std::abs(a - b) <= 1e-9 * std::max(std::abs(a), std::abs(b));
+}
+
+}  // namespace
+
+std::string inputs(const Explanation& e) {
+  const StoredAsset& a = e.stored;
+  const review::ClassPolicy& p = class_policy(e);
+  const std::string assets = e.policy->sources.assets;
+  TextTable t({"input", "value", "where it comes from"}, 3);
+  t.add_row({"asset", a.asset_id, "relation '" + assets + "'"});
+  t.add_row({"class", a.asset_class, "relation '" + assets + "'; its policy below"});
+  if (e.input) {
+    t.add_row({"in service on", e.input->in_service_on, "relation '" + assets + "'"});
+  } else {
+    t.add_row({"in service on", "-", "the asset is no longer in relation '" + assets + "'"});
+  }
+  t.add_row({"age", years(a.age_years), "completed age-years at the as-of date " + e.run.as_of});
+  t.add_row({"first cost", money(a.first_cost), "relation '" + assets + "': the depreciation basis"});
+  t.add_row({"depreciation", depreciation_words(p.depreciation),
+             "the class policy, on the asset's own first cost"});
+  t.add_row({"book value now", money(a.book_value_now),
+             fmt::format("first cost less the full deductions of its first {}", years(a.age_years))});
+  t.add_row({"market value now", money(a.market_value_now), market_value_words(e)});
+  t.add_row({"credibility factor", ratio(a.credibility_factor),
+             "its own cost level against the class curve (section 4)"});
+  const Years remaining = std::max(1, p.max_life_years - a.age_years);
+  t.add_row({"years weighed", fmt::format("1..{}", remaining),
+             fmt::format("max(1, max_life_years {} - age {})", p.max_life_years, a.age_years)});
+  return section("1. Inputs", t.render());
+}
+
+std::string rates_and_money(const Explanation& e) {
+  const review::Policy& p = *e.policy;
+  TextTable t({"rate or rule", "value", "meaning"}, 3);
+  t.add_row({"MARR before tax", percent(p.rates.marr), "per year"});
+  t.add_row({"income tax rate", percent(p.rates.income_tax_rate),
+             "effective combined rate; 0 means before-tax only"});
+  t.add_row({"after-tax MARR", percent(p.rates.after_tax_marr), "per year"});
+  t.add_row({"capital gains tax rate", percent(p.rates.capital_gains_tax_rate),
+             "on a sale above the original first cost"});
+  t.add_row({"cost escalation", percent(p.cost_escalation),
+             "per year, restating past costs into as-of money"});
+  t.add_row({"review margin", percent(p.review_margin), "|D - C| <= margin x C puts it under review"});
+  t.add_row({"money", p.real_money() ? "real" : "nominal",
+             p.real_money() ? "costs restated to " + e.run.as_of +
+                                  " money, so the MARR is a real rate (no inflation in it)"
+                            : "costs as recorded, so the MARR is a nominal rate"});
+  t.add_row({"decision basis", basis_words(e.review.basis),
+             "discounting at " + percent(e.basis_rate())});
+  t.add_row({"currency", "money units", "as recorded in the database; tenure converts nothing"});
+  return section("2. Policy rates and money", t.render());
+}
+
+std::string class_curves(const Explanation& e) {
+  const StoredClass& c = e.stored_class;
+  const review::ClassPolicy& p = class_policy(e);
+  TextTable t({"curve", "value"}, 2);
+  if (const auto& curve = e.model.cost_curve) {
+    if (curve->model == fleet::CostModel::linear) {
+      t.add_row({"cost curve", fmt::format("linear: cost of age-year k = a + g (k - 1), a = {}, "
+                                           "g = {} a year",
+                                           money(curve->a), money(curve->g))});
+    } else {
+      t.add_row({"cost curve", fmt::format("geometric: cost of age-year k = a (1 + g)^(k - 1), "
+                                           "a = {}, g = {:.2f}% a year",
+                                           money(curve->a), curve->g * 100)});
+    }
+    t.add_row({"fit quality", fmt::format("r2 = {:.3f} on {} asset-years of {} assets "
+                                          "(policy cost_model: {})",
+                                          curve->r2, c.asset_years, c.assets,
+                                          fleet::name(curve->model))});
+  } else {
+    t.add_row({"cost curve", "none: no complete year of cost history in the class"});
+  }
+  const fleet::ValueCurve& v = e.model.value_curve;
+  t.add_row({"value curve", fmt::format("fraction of first cost at age x = {} x (1 - {})^x",
+                                        ratio(v.value_start), ratio(v.value_decline))});
+  t.add_row({"value fit", v.model == fleet::ValueModel::fitted
+                              ? fmt::format("log-linear on {} valuations", v.valuations_used)
+                              : "the policy's annual_decline (fewer than 3 usable valuations)"});
+  t.add_row({"challenger", fmt::format("a new unit at {}, kept 1..{} years, depreciation {}",
+                                       money(p.challenger_first_cost), p.max_life_years,
+                                       depreciation_words(p.depreciation))});
+  if (const auto& ch = e.model.challenger) {
+    t.add_row({"economic life before tax", fmt::format("{}, least EUAC {}",
+                                                       years(ch->before_tax.curve.best_years),
+                                                       money(ch->before_tax.curve.best_euac))});
+    if (ch->after_tax) {
+      t.add_row({"economic life after tax", fmt::format("{}, least EUAC {}",
+                                                        years(ch->after_tax->curve.best_years),
+                                                        money(ch->after_tax->curve.best_euac))});
+    }
+  }
+  if (!e.model.note.empty()) t.add_row({"note", e.model.note});
+  return section(fmt::format("3. Class curves: {} ({} assets)", c.asset_class, c.assets),
+                 t.render());
+}
+
+std::string own_costs(const Explanation& e) {
+  const StoredAsset& a = e.stored;
+  const std::string title = fmt::format(
+      "4. Own cost history against the class curve ({} money, escalation {} a year)",
+      e.run.as_of, percent(e.policy->cost_escalation));
+  const std::string stored =
+      fmt::format("  stored by the run: m = {}, r = {}, factor = {}\n", a.cost_years,
+                  ratio(a.cost_ratio), ratio(a.credibility_factor));
+  if (!e.model.cost_curve) return section(title, "  no class cost curve to compare with\n" + stored);
+  if (!e.input) {
+    return section(title, fmt::format("  the asset is no longer in relation '{}': its events "
+                                      "cannot be read again\n",
+                                      e.policy->sources.assets) +
+                              stored);
+  }
+  if (!e.own) {
+    return section(title, "  its input row no longer holds valid dates; events not read again\n" +
+                              stored);
+  }
+  const OwnCosts& own = *e.own;
+  TextTable t({"age-year", "events", "observed cost", "class curve", "observed / curve"});
+  Money observed = 0;
+  Money predicted = 0;
+  for (const OwnYear& y : own.years) {
+    observed += y.observed;
+    predicted += y.class_curve;
+    t.add_row({std::to_string(y.age_year), std::to_string(y.events), money(y.observed),
+               money(y.class_curve), y.class_curve > 0 ? ratio(y.observed / y.class_curve) : "-"});
+  }
+  t.add_row({"total", std::to_string(own.events_counted), money(observed), money(predicted),
+             predicted > 0 ? ratio(observed / predicted) : "-"});
+  const fleet::Credibility& cr = own.credibility;
+  std::string body = t.render();
+  body += fmt::format(
+      "  events: {} counted, {} in the current age-year or after the as-of date (not complete), "
+      "{} not usable\n",
+      own.events_counted, own.events_not_complete, own.events_not_usable);
+  if (cr.measured) {
+    body += fmt::format(
+        "  credibility: m = {} complete years, r = observed / curve = {}, z = m / (m + 3) = {}, "
+        "factor = 1 + z (r - 1) = {}\n",
+        cr.years, ratio(cr.ratio), ratio(cr.weight), ratio(cr.factor));
+  } else {
+    body += fmt::format("  credibility: not measured (m = {}, or the curve predicts no cost): "
+                        "factor = 1, the class curve as is\n",
+                        cr.years);
+  }
+  const bool agrees = cr.years == a.cost_years && close(cr.ratio, a.cost_ratio) &&
+                      close(cr.factor, a.credibility_factor);
+  body += stored;
+  body += agrees ? "  the events read now agree with the run (to 1e-9)\n"
+                 : "  the events read now DIFFER from the run: the input rows changed since; "
+                   "everything below uses the stored factor\n";
+  return section(title, body);
+}
+
+std::string verdict_rule(const Explanation& e) {
+  const review::AssetReview& r = e.review;
+  std::string body =
+      "  replace when k* = 0; otherwise review when the age is at or past the class's economic "
+      "life,\n  or when |D - C| <= review margin x C; otherwise keep (D, C: least EUACs on the "
+      "basis)\n";
+  if (r.decision) {
+    const replacement::Decision& d = *r.decision;
+    const double gap = std::abs(d.defender_euac - d.challenger_euac);
+    const double allowed = e.policy->review_margin * d.challenger_euac;
+    TextTable t({"test", "figures", "holds"}, 2);
+    t.add_row({"k* = 0", fmt::format("k* = {}", d.timing.keep_years),
+               d.timing.keep_years == 0 ? "yes" : "no"});
+    t.add_row({"age >= economic life",
+               fmt::format("{} against {}", years(e.stored.age_years), years(d.challenger_esl)),
+               e.stored.age_years >= d.challenger_esl ? "yes" : "no"});
+    t.add_row({"|D - C| <= margin x C",
+               fmt::format("|{} - {}| = {} against {}", money(d.defender_euac),
+                           money(d.challenger_euac), money(gap), money(allowed)),
+               gap <= allowed ? "yes" : "no"});
+    body += t.render();
+  }
+  body += fmt::format("  verdict: {}\n  {}\n", review::to_string(r.verdict), r.reason);
+  return section("11. Verdict", body);
+}
+
+}  // namespace text
+
+namespace {
+
+std::string headline(const Explanation& e) {
+  const review::AssetReview& r = e.review;
+  std::string verdict;
+  switch (r.verdict) {
+    case review::Verdict::replace: verdict = "REPLACE now"; break;
+    case review::Verdict::review: verdict = "REVIEW"; break;
+    case review::Verdict::keep: verdict = "KEEP"; break;
+  }
+  if (r.decision && r.decision->timing.keep_years > 0) {
+    verdict += fmt::format(" (cheapest: replace after {} more)",
+                           formats::years(r.decision->timing.keep_years));
+  }
+  std::string out = fmt::format(
+      "tenure explain: asset {} (class {}), run {} as of {}\n\nVerdict: {}, {} basis\n  {}\n",
+      e.stored.asset_id, e.stored.asset_class, e.run.run_id, e.run.as_of, verdict,
+      text::basis_words(r.basis), r.reason);
+  if (e.reproduced()) {
+    out += "Check: the stored figures (EUACs, next year's marginal cost, k*, verdict, reason) are "
+           "reproduced exactly\nby recomputing from the stored inputs.\n";
+  } else {
+    out += "CHECK FAILED: stored figures differ from the recomputation:\n";
+    for (const std::string& d : e.differences) out += "  " + d + "\n";
+  }
+  return out;
+}
+
+}  // namespace
+
+std::string explanation_to_text(const Explanation& e) {
+  std::vector<std::string> sections{headline(e), text::inputs(e), text::rates_and_money(e),
+                                    text::class_curves(e), text::own_costs(e)};
+  if (e.review.defender && e.model.challenger) {
+    const replacement::AssetAnalysis& d = *e.review.defender;
+    const replacement::AssetAnalysis& c = *e.model.challenger;
+    sections.push_back(text::defender_future(e));
+    sections.push_back(text::selling_now(e));
+    sections.push_back(text::cash_flows("7. Defender", d.table, e.basis_rate(), e.stored.age_years));
+    sections.push_back(text::euac_by_life(
+        "8. EUAC and marginal cost by more years kept: defender (* = best remaining life)", d,
+        e.review.basis, e.stored.age_years));
+    sections.push_back(text::euac_by_life(
+        "8b. EUAC and marginal cost by years kept: challenger (* = economic service life)", c,
+        e.review.basis, 0));
+    sections.push_back(text::cash_flows("9. Challenger", c.table, e.basis_rate(), 0));
+    sections.push_back(text::timing(e));
+  } else {
+    sections.push_back(text::section("5-10. Analysis", "  not possible: " + e.model.note + "\n"));
+  }
+  sections.push_back(text::verdict_rule(e));
+  sections.push_back(std::string(formats::kCaution) + "\n");
+  return fmt::format("{}", fmt::join(sections, "\n"));
+}
+
+}  // namespace tenure::explain

@@ -1,0 +1,120 @@
+// Rebuilding a stored analysis (see rebuild.h).
+#include "explain/rebuild.h"
+
+#include <type_traits>
+
+#include <fmt/format.h>
+
+#include "core/errors.h"
+
+namespace tenure::explain {
+namespace {
+
+fleet::CostModel cost_model_named(const std::string& name) {
+  if (name == fleet::name(fleet::CostModel::linear)) return fleet::CostModel::linear;
+  if (name == fleet::name(fleet::CostModel::geometric)) return fleet::CostModel::geometric;
+  throw RuntimeFailure("stored cost_model '" + name + "' is not linear or geometric");
+}
+
+fleet::ValueModel value_model_named(const std::string& name) {
+  if (name == fleet::name(fleet::ValueModel::fitted)) return fleet::ValueModel::fitted;
+  if (name == fleet::name(fleet::ValueModel::policy)) return fleet::ValueModel::policy;
+  throw RuntimeFailure("stored value_model '" + name + "' is not fitted or policy");
+}
+
+// A figure as people read it and to the last bit, so a difference in the 17th digit shows.
+template <class T>
+std::string shown(const std::optional<T>& value) {
+  if (!value) return "none";
+  if constexpr (std::is_floating_point_v<T>) return fmt::format("{:.17g}", *value);
+  else return fmt::format("{}", *value);
+}
+
+template <class T>
+void compare(std::vector<std::string>& out, const char* name, const std::optional<T>& stored,
+             const std::optional<T>& again) {
+  if (stored != again) {
+    out.push_back(fmt::format("{}: stored {}, recomputed {}", name, shown(stored), shown(again)));
+  }
+}
+
+}  // namespace
+
+review::ClassModel rebuild_class_model(const StoredClass& stored, const review::Policy& policy) {
+  const auto class_policy = policy.classes.find(stored.asset_class);
+  if (class_policy == policy.classes.end()) {
+    throw RuntimeFailure("the run's policy has no class '" + stored.asset_class + "'");
+  }
+  std::optional<fleet::CostCurve> cost_curve;
+  if (stored.cost_model) {
+    // Only the model, a and g enter predict(); the rest is carried for display.
+    cost_curve = fleet::CostCurve{cost_model_named(*stored.cost_model),
+                                  stored.cost_a.value_or(0),
+                                  stored.cost_g.value_or(0),
+                                  stored.cost_r2.value_or(0),
+                                  static_cast<std::size_t>(stored.asset_years),
+                                  0,
+                                  static_cast<std::size_t>(stored.assets),
+                                  false};
+  }
+  const fleet::ValueCurve value_curve{value_model_named(stored.value_model), stored.value_start,
+                                      stored.value_decline,
+                                      static_cast<std::size_t>(stored.valuations_used)};
+  return review::make_class_model(stored.asset_class, class_policy->second,
+                                  static_cast<std::size_t>(stored.assets), std::move(cost_curve),
+                                  value_curve, policy.rates);
+}
+
+review::DefenderInputs rebuild_defender_inputs(const StoredAsset& stored,
+                                               const review::ClassModel& model) {
+  review::DefenderInputs in;
+  in.age_years = stored.age_years;
+  in.market_value_now = stored.market_value_now;
+  in.market_value_source = stored.market_value_source;
+  const int m = stored.cost_years;
+  // The row keeps m, r and the factor; z follows from m (fleet/credibility.h rule 3), and the
+  // ratio was measured unless rule (5) reported it as exactly 1 with factor 1.
+  in.credibility = fleet::Credibility{
+      m, stored.cost_ratio, static_cast<double>(m) / (m + fleet::kCredibilityYears),
+      stored.credibility_factor,
+      m > 0 && !(stored.cost_ratio == 1.0 && stored.credibility_factor == 1.0)};
+  in.ownership = review::defender_ownership(model, stored.first_cost, stored.age_years,
+                                            stored.market_value_now, stored.credibility_factor);
+  return in;
+}
+
+review::AssetReview recompute(const StoredAsset& stored, const review::ClassModel& model,
+                              const review::Policy& policy) {
+  return review::judge(0, rebuild_defender_inputs(stored, model), model, policy);
+}
+
+std::vector<std::string> differences(const StoredAsset& stored, const review::AssetReview& again) {
+  std::vector<std::string> out;
+  const replacement::Decision* d = again.decision ? &*again.decision : nullptr;
+  compare(out, "defender_euac", stored.defender_euac,
+          d ? std::optional<Money>(d->defender_euac) : std::nullopt);
+  compare(out, "challenger_euac", stored.challenger_euac,
+          d ? std::optional<Money>(d->challenger_euac) : std::nullopt);
+  compare(out, "marginal_cost_next_year", stored.marginal_cost_next_year,
+          again.marginal_cost_next_year);
+  compare(out, "replace_after_years", stored.replace_after_years,
+          d ? std::optional<Years>(d->timing.keep_years) : std::nullopt);
+  compare(out, "verdict", std::optional<std::string>(stored.verdict),
+          std::optional<std::string>(review::to_string(again.verdict)));
+  compare(out, "reason", std::optional<std::string>(stored.reason),
+          std::optional<std::string>(again.reason));
+  compare(out, "basis", std::optional<std::string>(stored.basis),
+          std::optional<std::string>(replacement::to_string(again.basis)));
+  compare(out, "book_value_now", std::optional<Money>(stored.book_value_now),
+          std::optional<Money>(again.book_value_now));
+  compare(out, "class_esl_years", stored.class_esl_years, again.class_esl_years);
+  compare(out, "defender_best_years", stored.defender_best_years,
+          d ? std::optional<Years>(d->defender_best_years) : std::nullopt);
+  compare(out, "defender_euac_before_tax", stored.defender_euac_before_tax,
+          again.defender_euac_before_tax);
+  compare(out, "defender_euac_after_tax", stored.defender_euac_after_tax,
+          again.defender_euac_after_tax);
+  return out;
+}
+
+}  // namespace tenure::explain

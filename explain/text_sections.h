@@ -1,0 +1,36 @@
+// The sections of explain_text.h, one function each, shared by explain_text.cpp (the asset, its
+// class and its verdict) and analysis_text.cpp (the year-by-year tables). Internal to explain/.
+#pragma once
+
+#include <string>
+
+#include "depreciation/method.h"
+#include "explain/explanation.h"
+
+namespace tenure::explain::text {
+
+// "Title\n" + body: the form of every section.
+std::string section(const std::string& title, const std::string& body);
+// "macrs, recovery_years 7" from the depreciation object of the policy.
+std::string depreciation_words(const depreciation::Spec& spec);
+// "after-tax" or "before-tax".
+std::string basis_words(replacement::Basis basis);
+// A money figure with " *" when it is the best point, two spaces otherwise (columns align).
+std::string marked(Money amount, bool best);
+
+std::string inputs(const Explanation& e);
+std::string rates_and_money(const Explanation& e);
+std::string class_curves(const Explanation& e);
+std::string own_costs(const Explanation& e);
+std::string verdict_rule(const Explanation& e);
+
+// The year-by-year tables (analysis_text.cpp); they need the recomputed defender analysis.
+std::string defender_future(const Explanation& e);
+std::string selling_now(const Explanation& e);
+std::string cash_flows(const std::string& who, const replacement::AfterTaxTable& table,
+                       Rate rate, Years age);
+std::string euac_by_life(const std::string& title, const replacement::AssetAnalysis& a,
+                         replacement::Basis basis, Years age);
+std::string timing(const Explanation& e);
+
+}  // namespace tenure::explain::text

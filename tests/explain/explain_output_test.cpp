@@ -1,0 +1,109 @@
+// explain's text and JSON: every section, the tables with one row per year, present worths that
+// are the after-tax cash flows discounted at the basis rate (closed form), the equivalent case
+// file that `tenure case` would analyse to the same figures, and the caution of SPEC 10.
+#include <gtest/gtest.h>
+
+#include <cmath>
+
+#include <nlohmann/json.hpp>
+
+#include "explain/explain_json.h"
+#include "explain/explain_text.h"
+#include "formats/case_json.h"
+#include "formats/caution.h"
+#include "pump_fixture.h"
+
+namespace tenure::explain {
+namespace {
+
+using testing::PumpFixture;
+
+Explanation reproduced_explanation(int age, double tax = 0.25) {
+  PumpFixture f(age, tax);
+  f.stored.reason = explain_asset(f.run, f.stored_class, f.stored, std::nullopt).review.reason;
+  Explanation e = explain_asset(f.run, f.stored_class, f.stored, std::nullopt);
+  EXPECT_TRUE(e.reproduced());
+  return e;
+}
+
+TEST(ExplainText, HasEverySectionTheVerdictAndTheCaution) {
+  const Explanation e = reproduced_explanation(5);
+  const std::string text = explanation_to_text(e);
+  for (const char* heading :
+       {"tenure explain: asset PF-TEST (class pump-fixture), run 7 as of 2026-06-30",
+        "Verdict: ", "are reproduced exactly", "1. Inputs", "2. Policy rates and money",
+        "3. Class curves: pump-fixture", "4. Own cost history against the class curve",
+        "5. Defender's future", "6. Defender: its opportunity cost",
+        "7. Defender: after-tax cash flows", "7. Defender: if sold at the end of the year",
+        "8. EUAC and marginal cost by more years kept: defender",
+        "8b. EUAC and marginal cost by years kept: challenger", "9. Challenger: after-tax",
+        "10. Replacement timing", "11. Verdict"}) {
+    EXPECT_NE(text.find(heading), std::string::npos) << heading;
+  }
+  EXPECT_NE(text.find("money                    nominal"), std::string::npos);
+  EXPECT_NE(text.find("linear: cost of age-year k = a + g (k - 1), a = 1,000.00, g = 400.00"),
+            std::string::npos);
+  EXPECT_NE(text.find(e.review.reason), std::string::npos);
+  EXPECT_EQ(text.substr(text.size() - formats::kCaution.size() - 1),
+            std::string(formats::kCaution) + "\n");
+}
+
+TEST(ExplainText, SaysLoudlyWhenAFigureIsNotReproduced) {
+  PumpFixture f(5);
+  const std::string text =
+      explanation_to_text(explain_asset(f.run, f.stored_class, f.stored, std::nullopt));
+  EXPECT_NE(text.find("CHECK FAILED: stored figures differ from the recomputation:\n  reason: "),
+            std::string::npos);
+}
+
+TEST(ExplainJson, HoldsTheTablesAndParses) {
+  const Explanation e = reproduced_explanation(5);
+  const nlohmann::json doc = nlohmann::json::parse(explanation_to_json(e).dump());
+  EXPECT_EQ(doc.at("asset_id"), "PF-TEST");
+  EXPECT_EQ(doc.at("check").at("reproduced"), true);
+  EXPECT_EQ(doc.at("caution"), formats::kCaution);
+  EXPECT_EQ(doc.at("rates").at("money"), "nominal");
+  EXPECT_EQ(doc.at("class").at("cost_curve").at("a"), 1000.0);
+  const int weighed = testing::kMaxLife - 5;
+  const nlohmann::json& flows = doc.at("defender").at("cash_flows");
+  ASSERT_EQ(flows.size(), static_cast<std::size_t>(weighed));
+  const double i = doc.at("rates").at("basis_rate").get<double>();
+  EXPECT_DOUBLE_EQ(i, 0.10 * (1 - 0.25));  // after-tax MARR default (SPEC 4)
+  for (std::size_t n = 0; n < flows.size(); ++n) {
+    const double flow = flows[n].at("after_tax_cash_flow").get<double>();
+    // Closed form: a year-end flow discounted n + 1 years.
+    EXPECT_NEAR(flows[n].at("present_worth").get<double>(), flow / std::pow(1 + i, n + 1),
+                1e-9 * std::abs(flow));
+    EXPECT_TRUE(flows[n].at("if_sold").contains("disposal_tax"));
+  }
+  EXPECT_EQ(doc.at("defender").at("after_tax").at("curve").size(), static_cast<std::size_t>(weighed));
+  EXPECT_EQ(doc.at("challenger").at("before_tax").at("curve").size(), 12u);
+  EXPECT_EQ(doc.at("timing").at("rows").size(), static_cast<std::size_t>(weighed + 1));
+  EXPECT_EQ(doc.at("verdict").at("defender_euac"), *e.stored.defender_euac);
+  EXPECT_EQ(doc.at("verdict").at("verdict"), e.stored.verdict);
+}
+
+TEST(ExplainJson, EquivalentCaseAnalysesToTheSameFigures) {
+  for (const double tax : {0.0, 0.25}) {
+    const Explanation e = reproduced_explanation(9, tax);
+    const nlohmann::json doc = explanation_to_json(e);
+    const replacement::Case input = formats::read_case(doc.at("equivalent_case").dump());
+    const nlohmann::json as_case =
+        formats::case_result_to_json(replacement::analyse(input), input.rates);
+    // The shape `tenure case` prints (SPEC 5), figure for figure.
+    for (const char* basis : {"before_tax", "after_tax"}) {
+      if (!as_case.at("defender").contains(basis)) continue;
+      const nlohmann::json& ours = doc.at("defender").at(basis);
+      const nlohmann::json& theirs = as_case.at("defender").at(basis);
+      EXPECT_EQ(ours.at("euac"), theirs.at("euac")) << basis;
+      EXPECT_EQ(ours.at("best_years"), theirs.at("best_years")) << basis;
+      EXPECT_EQ(ours.at("marginal_costs"), theirs.at("marginal_costs")) << basis;
+    }
+    EXPECT_EQ(doc.at("verdict").at("replace_after_years"),
+              as_case.at("decision").at("replace_after_years"));
+    EXPECT_EQ(doc.at("verdict").at("challenger_euac"), as_case.at("decision").at("challenger_euac"));
+  }
+}
+
+}  // namespace
+}  // namespace tenure::explain

@@ -1,0 +1,146 @@
+// The report page from an invented stored run (tests/explain/pump_fixture.h): self-contained
+// (no script, nothing fetched), every database text escaped, the caution of SPEC 10, one EUAC
+// and one age chart per class and one marginal-cost chart per due asset (up to the cap), the
+// due list in order, newly due and rejected rows counted.
+#include <gtest/gtest.h>
+
+#include <fmt/format.h>
+
+#include "explain/explanation.h"
+#include "formats/caution.h"
+#include "report/html.h"
+#include "report/report_page.h"
+#include "tests/explain/pump_fixture.h"
+
+namespace tenure::report {
+namespace {
+
+using explain::testing::PumpFixture;
+
+std::size_t count(const std::string& text, const std::string& what) {
+  std::size_t n = 0;
+  for (std::size_t at = text.find(what); at != std::string::npos; at = text.find(what, at + 1)) ++n;
+  return n;
+}
+
+// A stored asset `age` years old, consistent with its recomputation.
+explain::StoredAsset asset(int age, const std::string& id) {
+  PumpFixture f(age);
+  f.stored.reason =
+      explain::explain_asset(f.run, f.stored_class, f.stored, std::nullopt).review.reason;
+  f.stored.asset_id = id;
+  return f.stored;
+}
+
+ReportData invented_run() {
+  PumpFixture f(0);
+  ReportData data;
+  data.run = f.run;
+  data.run.rows_read = 1234;
+  data.run.rows_rejected = 2;
+  data.classes = {f.stored_class};
+  for (const char* basis : {"before_tax", "after_tax"}) {
+    const auto& curve = f.result->challenger.on(std::string(basis) == "after_tax"
+                                                    ? replacement::Basis::after_tax
+                                                    : replacement::Basis::before_tax).curve;
+    for (std::size_t n = 0; n < curve.euac.size(); ++n) {
+      data.challenger_curves.push_back({"pump-fixture", basis, static_cast<Years>(n + 1),
+                                        curve.euac[n], curve.marginal_costs[n]});
+    }
+  }
+  data.classes[0].esl_years_before_tax = f.result->challenger.before_tax.curve.best_years;
+  data.classes[0].euac_before_tax = f.result->challenger.before_tax.curve.best_euac;
+  data.classes[0].esl_years_after_tax = f.result->challenger.after_tax->curve.best_years;
+  data.classes[0].euac_after_tax = f.result->challenger.after_tax->curve.best_euac;
+  for (int age = 0; age <= 11; ++age) data.assets.push_back(asset(age, fmt::format("PF-{:03}", age)));
+  data.assets.push_back(asset(11, "<script>alert('x')</script>"));
+  data.rejected = {{"cost_event", "row 3 (asset_id '<img src=x>')", "amount 'n/a' is not a number"},
+                   {"asset", "row 9", "first_cost 0 must be greater than 0"}};
+  data.due_before = {"PF-011"};
+  return data;
+}
+
+std::size_t due_count(const ReportData& data) {
+  std::size_t n = 0;
+  for (const auto& a : data.assets) n += a.due() ? 1 : 0;
+  return n;
+}
+
+TEST(ReportPage, IsSelfContainedAndEscapesDatabaseText) {
+  const std::string html = render_report(invented_run());
+  EXPECT_EQ(html.rfind("<!DOCTYPE html>\n<html lang=\"en\">", 0), 0u);
+  EXPECT_NE(html.find("Content-Security-Policy\" content=\"default-src 'none'"), std::string::npos);
+  EXPECT_EQ(html.find("<script"), std::string::npos);
+  EXPECT_EQ(html.find("<img"), std::string::npos);
+  EXPECT_NE(html.find("&lt;script&gt;alert(&#39;x&#39;)&lt;/script&gt;"), std::string::npos);
+  EXPECT_NE(html.find("&lt;img src=x&gt;"), std::string::npos);
+  for (const char* fetches : {"<link", "src=\"", "url(", "@import", "https://"}) {
+    EXPECT_EQ(html.find(fetches), std::string::npos) << fetches;
+  }
+  // The only http: text is the SVG namespace, which is a name, not a request.
+  EXPECT_EQ(count(html, "http://"), count(html, "http://www.w3.org/2000/svg"));
+}
+
+TEST(ReportPage, CarriesTheCaution) {
+  const std::string html = render_report(invented_run());
+  EXPECT_NE(html.find(escape(formats::kCaution)), std::string::npos);
+}
+
+TEST(ReportPage, DrawsTheClassChartsAndOneChartPerDueAsset) {
+  const ReportData data = invented_run();
+  const std::string html = render_report(data);
+  const std::size_t due = due_count(data);
+  ASSERT_GT(due, 2u);
+  ASSERT_LT(due, data.assets.size());
+  EXPECT_EQ(count(html, "<svg "), 2 + due);
+  EXPECT_NE(html.find(fmt::format(">economic life (after tax): {} years<",
+                                  *data.classes[0].esl_years_after_tax)),
+            std::string::npos);
+  EXPECT_NE(html.find(">units in service<"), std::string::npos);
+  EXPECT_NE(html.find(">age at the end of the year kept<"), std::string::npos);
+  EXPECT_NE(html.find(fmt::format("Due: {} assets to review or replace", due)), std::string::npos);
+  // All due were new but PF-011, which was due in the previous run.
+  EXPECT_NE(html.find(fmt::format("<div class=\"n\">{}</div><div class=\"what\">newly due", due - 1)),
+            std::string::npos);
+  EXPECT_NE(html.find("2 input rows could not be used"), std::string::npos);
+}
+
+TEST(ReportPage, ListsReplaceBeforeReview) {
+  const std::string html = render_report(invented_run());
+  const std::size_t list = html.find("<table class=\"due\">");
+  ASSERT_NE(list, std::string::npos);
+  const std::size_t last_replace = html.rfind("badge replace\">REPLACE", html.find("</table>", list));
+  const std::size_t first_review = html.find("badge review\">REVIEW", list);
+  ASSERT_NE(first_review, std::string::npos);
+  EXPECT_LT(last_replace, first_review);
+}
+
+TEST(ReportPage, CapsThePerAssetCharts) {
+  ReportData data = invented_run();
+  const explain::StoredAsset old = asset(11, "x");
+  for (std::size_t i = 0; i < kMaxAssetCharts; ++i) {
+    explain::StoredAsset copy = old;
+    copy.asset_id = fmt::format("EXTRA-{:04}", i);
+    data.assets.push_back(copy);
+  }
+  const std::string html = render_report(data);
+  EXPECT_EQ(count(html, "<svg "), 2 + kMaxAssetCharts);
+  EXPECT_NE(html.find(fmt::format("Charts are drawn for the first {} due assets", kMaxAssetCharts)),
+            std::string::npos);
+}
+
+TEST(ReportPage, ClassWithoutCostCurveShowsItsNoteAndNoCharts) {
+  ReportData data = invented_run();
+  data.assets.clear();
+  data.challenger_curves.clear();
+  data.classes[0].cost_model.reset();
+  data.classes[0].note = "no complete year of cost history for class 'pump-fixture'";
+  const std::string html = render_report(data);
+  EXPECT_EQ(count(html, "<svg "), 0u);
+  EXPECT_NE(html.find("no complete year of cost history for class &#39;pump-fixture&#39;"),
+            std::string::npos);
+  EXPECT_NE(html.find("No asset is due in this run."), std::string::npos);
+}
+
+}  // namespace
+}  // namespace tenure::report
