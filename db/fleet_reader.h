@@ -14,11 +14,14 @@
 // Rules (cited by the code):
 //   (1) asset: asset_id present, valid UTF-8, at most 256 bytes, not seen before (a duplicate is
 //       rejected, the first row kept); asset_class present and in the policy; in_service_on a
-//       valid date; first_cost a finite number > 0; retired_on NULL or a valid date not before
+//       valid date; first_cost an amount > 0; retired_on NULL or a valid date not before
 //       in_service_on.
 //   (2) cost_event: asset_id of an accepted asset; occurred_on a valid date, not before
-//       in_service_on and not after retired_on; amount a finite number (negative is a credit).
-//   (3) asset_valuation: as (2), with amount a finite number >= 0.
+//       in_service_on and not after retired_on; amount an amount (negative is a credit).
+//   (3) asset_valuation: as (2), with amount an amount >= 0.
+//   An amount is a number stored as one (text is refused, never read as 0), finite, and at most
+//   kMaxAmount (1e15) in magnitude: no equipment costs more, and sums, restatements and EUACs of
+//   amounts near the double's limit (1e308) would overflow to infinity.
 //   (4) Events and valuations dated after the as-of date are not bad rows: they are not counted
 //       and are tallied in rows_after_as_of.
 #pragma once
@@ -32,6 +35,8 @@
 #include "review/policy.h"
 
 namespace tenure::db {
+
+inline constexpr double kMaxAmount = 1e15;
 
 struct Rejection {
   std::string source;   // the relation as named by the policy's sources

@@ -14,6 +14,9 @@ namespace tenure::interest {
 namespace {
 
 constexpr double kSmallRate = 1e-5;  // below this the gradient factors are summed directly
+// Direct sums run to here at most; a longer series (n up to the double's limit is finite and
+// allowed) takes the closed form, whose cancellation at tiny i matters far less at such n.
+constexpr double kMaxSummedPeriods = 100000;
 
 void check(Rate i, double n, bool n_positive) {
   require_rate(i, "i");
@@ -25,6 +28,10 @@ void check(Rate i, double n, bool n_positive) {
 
 // (1+i)^n - 1 without losing digits for small i.
 double growth_minus_one(Rate i, double n) { return std::expm1(n * std::log1p(i)); }
+
+// 1 - (1+i)^-n, likewise; it stays finite where (1+i)^n overflows (a huge i or n), so factors
+// written with it give their limits there instead of inf / inf = NaN.
+double one_minus_discount(Rate i, double n) { return -std::expm1(-n * std::log1p(i)); }
 
 }  // namespace
 
@@ -41,7 +48,7 @@ double fp(Rate i, double n) {
 double pa(Rate i, double n) {
   check(i, n, false);
   if (i == 0) return n;
-  return growth_minus_one(i, n) / i * pf(i, n);
+  return one_minus_discount(i, n) / i;
 }
 
 double fa(Rate i, double n) {
@@ -62,14 +69,19 @@ double af(Rate i, double n) {
 
 double pg(Rate i, double n) {
   check(i, n, false);
-  if (std::abs(i) < kSmallRate && n == std::floor(n)) {
+  if (std::abs(i) < kSmallRate && n == std::floor(n) && n <= kMaxSummedPeriods) {
     // Sum (k-1)/(1+i)^k for k = 1..n: exact in form, stable at i -> 0 (limit n(n-1)/2).
     double sum = 0;
     for (int k = 2; k <= static_cast<int>(n); ++k) sum += (k - 1) * pf(i, k);
     return sum;
   }
   if (i == 0) return n * (n - 1) / 2;
-  return (growth_minus_one(i, n) - i * n) / (i * i * fp(i, n));
+  const double growth = fp(i, n);
+  if (std::isinf(growth)) {
+    // Divided through by (1+i)^n, which has overflowed: (1 - (1+i)^-n - i n (1+i)^-n) / i^2.
+    return (one_minus_discount(i, n) - i * (n * pf(i, n))) / (i * i);
+  }
+  return (growth_minus_one(i, n) - i * n) / (i * i * growth);
 }
 
 double ag(Rate i, double n) {
@@ -84,7 +96,7 @@ double geometric_pa(Rate i, Rate g, double n) {
   const double ratio = (1 + g) / (1 + i);
   if (std::abs(i - g) < kSmallRate * (1 + std::abs(i))) {
     // Sum of ratio^(k-1) / (1+i), stable as g -> i (limit n / (1+i)).
-    if (n == std::floor(n)) {
+    if (n == std::floor(n) && n <= kMaxSummedPeriods) {
       double sum = 0, term = 1;
       for (int k = 1; k <= static_cast<int>(n); ++k, term *= ratio) sum += term;
       return sum / (1 + i);

@@ -10,9 +10,9 @@
 namespace tenure::tax {
 
 struct Rates {
-  Rate marr;                    // before-tax MARR, > 0
+  Rate marr;                    // before-tax MARR, 0 < marr <= 1
   Rate income_tax_rate;         // effective combined rate, 0 <= t < 1
-  Rate after_tax_marr;          // > 0; default marr * (1 - t)
+  Rate after_tax_marr;          // 0 < rate <= 1; default marr * (1 - t)
   Rate capital_gains_tax_rate;  // 0 <= rate < 1; default income_tax_rate
 
   // Applies the defaults and checks every rate; errors name "$.marr" and so on.
