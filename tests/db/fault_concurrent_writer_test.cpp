@@ -59,11 +59,17 @@ struct WriterCounts {
       if (read(stop, &byte, 1) >= 0) break;  // a byte, or the test closed the pipe
       insert.bind(1, static_cast<double>(i % 500) + 0.25);
       insert.bind(2, ids[static_cast<std::size_t>(i) % ids.size()]);
+      // As a host should write: BEGIN IMMEDIATE takes the write lock first, waiting through its
+      // busy timeout. (A bare INSERT in a rollback journal first reads, then asks for the lock,
+      // and SQLite answers BUSY at once rather than let it deadlock with a committing review.)
       try {
+        db.exec("BEGIN IMMEDIATE");
         insert.run();
+        db.exec("COMMIT");
         ++counts.committed;
       } catch (const std::exception&) {
         insert.reset();
+        if (db.in_transaction()) db.exec("ROLLBACK");
         ++counts.failed;
       }
       // A busy host, not a tight loop: back to back, a writer that never pauses starves
