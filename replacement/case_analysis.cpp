@@ -5,6 +5,7 @@
 #include <fmt/format.h>
 
 #include "core/errors.h"
+#include "replacement/reason_text.h"
 
 namespace tenure::replacement {
 
@@ -15,8 +16,8 @@ const BasisAnalysis& AssetAnalysis::on(Basis basis) const {
 AssetAnalysis analyse_asset(const Ownership& asset, const tax::Rates& rates) {
   KeepingCosts before = before_tax_keeping_costs(asset, rates.marr);
   LifeCurve before_curve = life_curve(before);
-  AssetAnalysis result{{std::move(before), std::move(before_curve)}, std::nullopt,
-                       after_tax_table(asset, rates)};
+  AssetAnalysis result{
+      {std::move(before), std::move(before_curve)}, std::nullopt, after_tax_table(asset, rates)};
   if (rates.after_tax()) {
     KeepingCosts after = after_tax_keeping_costs(result.table, rates.after_tax_marr);
     LifeCurve after_curve = life_curve(after);
@@ -27,10 +28,6 @@ AssetAnalysis analyse_asset(const Ownership& asset, const tax::Rates& rates) {
 
 namespace {
 
-std::string money(Money amount) { return fmt::format("{:.2f}", amount); }
-
-std::string years(Years n) { return fmt::format("{} year{}", n, n == 1 ? "" : "s"); }
-
 std::string reason_for(const Decision& d, Years max_years) {
   const std::string basis = d.basis == Basis::after_tax ? "after-tax" : "before-tax";
   if (d.timing.keep_years == 0) {
@@ -38,17 +35,17 @@ std::string reason_for(const Decision& d, Years max_years) {
         "Replace now: on an {} basis the defender's least EUAC is {} (keeping {}) against the "
         "challenger's {} (economic life {}), and no period of keeping it costs less than "
         "replacing it at once.",
-        basis, money(d.defender_euac), years(d.defender_best_years), money(d.challenger_euac),
-        years(d.challenger_esl));
+        basis, reason_money(d.defender_euac), reason_years(d.defender_best_years),
+        reason_money(d.challenger_euac), reason_years(d.challenger_esl));
   }
-  const std::string horizon = d.timing.keep_years == max_years
-                                  ? " (the end of the years given for it)"
-                                  : "";
+  const std::string horizon =
+      d.timing.keep_years == max_years ? " (the end of the years given for it)" : "";
   return fmt::format(
       "Keep the defender {} more{} and then replace it: on an {} basis its least EUAC is {} "
       "(keeping {}) against the challenger's {} (economic life {}).",
-      years(d.timing.keep_years), horizon, basis, money(d.defender_euac),
-      years(d.defender_best_years), money(d.challenger_euac), years(d.challenger_esl));
+      reason_years(d.timing.keep_years), horizon, basis, reason_money(d.defender_euac),
+      reason_years(d.defender_best_years), reason_money(d.challenger_euac),
+      reason_years(d.challenger_esl));
 }
 
 }  // namespace
@@ -86,8 +83,8 @@ CaseResult analyse(const Case& input) {
   if (input.study_period_years) {
     const KeepingCosts* defender =
         result.defender ? &result.defender->on(result.basis).costs : nullptr;
-    result.study_period = study_period(defender, result.challenger.on(result.basis).costs,
-                                       *input.study_period_years);
+    result.study_period =
+        study_period(defender, result.challenger.on(result.basis).costs, *input.study_period_years);
   }
   return result;
 }

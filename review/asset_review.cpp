@@ -1,20 +1,27 @@
 // One asset's defender analysis and verdict (see asset_review.h).
 #include "review/asset_review.h"
 
+#include <fmt/format.h>
+
 #include <algorithm>
 #include <cmath>
 
-#include <fmt/format.h>
-
 #include "depreciation/schedule.h"
+#include "replacement/reason_text.h"
 
 namespace tenure::review {
 
+using replacement::reason_money;
+using replacement::reason_years;
+
 const char* to_string(Verdict verdict) {
   switch (verdict) {
-    case Verdict::keep: return "keep";
-    case Verdict::review: return "review";
-    case Verdict::replace: return "replace";
+    case Verdict::keep:
+      return "keep";
+    case Verdict::review:
+      return "review";
+    case Verdict::replace:
+      return "replace";
   }
   return "keep";
 }
@@ -70,13 +77,6 @@ replacement::Ownership defender_ownership(const ClassModel& model, Money first_c
   return own;
 }
 
-namespace {
-
-std::string money(Money amount) { return fmt::format("{:.2f}", amount); }
-std::string years(Years n) { return fmt::format("{} year{}", n, n == 1 ? "" : "s"); }
-
-}  // namespace
-
 AssetReview review_asset(std::size_t asset, const FleetData& data, const ClassModel& model,
                          const Policy& policy) {
   return judge(asset, defender_inputs(asset, data, model), model, policy);
@@ -91,12 +91,13 @@ AssetReview judge(std::size_t asset, DefenderInputs inputs, const ClassModel& mo
   r.verdict = Verdict::review;
   r.basis = rates.after_tax() ? replacement::Basis::after_tax : replacement::Basis::before_tax;
   if (!model.challenger) {
-    r.book_value_now = depreciation::Schedule(*r.inputs.ownership.depreciation,
-                                              r.inputs.ownership.first_cost)
-                           .book_value(r.inputs.age_years);
-    r.reason = fmt::format("Review: {}; tenure cannot weigh this asset until the class has a "
-                           "complete year of costs.",
-                           model.note);
+    r.book_value_now =
+        depreciation::Schedule(*r.inputs.ownership.depreciation, r.inputs.ownership.first_cost)
+            .book_value(r.inputs.age_years);
+    r.reason = fmt::format(
+        "Review: {}; tenure cannot weigh this asset until the class has a "
+        "complete year of costs.",
+        model.note);
     return r;
   }
   r.defender = std::make_unique<replacement::AssetAnalysis>(
@@ -111,36 +112,36 @@ AssetReview judge(std::size_t asset, DefenderInputs inputs, const ClassModel& mo
   r.class_esl_years = esl;
   const Years age = r.inputs.age_years;
   const std::string basis = r.basis == replacement::Basis::after_tax ? "after-tax" : "before-tax";
-  const bool close = std::abs(d.defender_euac - d.challenger_euac) <=
-                     policy.review_margin * d.challenger_euac;
+  const bool close =
+      std::abs(d.defender_euac - d.challenger_euac) <= policy.review_margin * d.challenger_euac;
   if (d.timing.keep_years == 0) {
     r.verdict = Verdict::replace;
     r.reason = fmt::format(
         "Replace: keeping it any longer costs more than a new unit; its least {} EUAC is {} "
         "against the challenger's {} and next year's marginal cost is {}.",
-        basis, money(d.defender_euac), money(d.challenger_euac),
-        money(*r.marginal_cost_next_year));
+        basis, reason_money(d.defender_euac), reason_money(d.challenger_euac),
+        reason_money(*r.marginal_cost_next_year));
   } else if (age >= esl) {
     r.verdict = Verdict::review;
     r.reason = fmt::format(
         "Review: at {} it is at or past the class's economic life of {}; replacing after {} "
         "more is cheapest ({} EUAC {} against the challenger's {}).",
-        years(age), years(esl), years(d.timing.keep_years), basis, money(d.defender_euac),
-        money(d.challenger_euac));
+        reason_years(age), reason_years(esl), reason_years(d.timing.keep_years), basis,
+        reason_money(d.defender_euac), reason_money(d.challenger_euac));
   } else if (close) {
     r.verdict = Verdict::review;
     r.reason = fmt::format(
         "Review: its least {} EUAC of {} is within {:g}% of the challenger's {}; replacing "
         "after {} more is cheapest.",
-        basis, money(d.defender_euac), policy.review_margin * 100, money(d.challenger_euac),
-        years(d.timing.keep_years));
+        basis, reason_money(d.defender_euac), policy.review_margin * 100,
+        reason_money(d.challenger_euac), reason_years(d.timing.keep_years));
   } else {
     r.verdict = Verdict::keep;
     r.reason = fmt::format(
         "Keep: at {} it is short of the class's economic life of {}; its least {} EUAC is {} "
         "against the challenger's {}, and replacing after {} more is cheapest.",
-        years(age), years(esl), basis, money(d.defender_euac), money(d.challenger_euac),
-        years(d.timing.keep_years));
+        reason_years(age), reason_years(esl), basis, reason_money(d.defender_euac),
+        reason_money(d.challenger_euac), reason_years(d.timing.keep_years));
   }
   return r;
 }

@@ -16,6 +16,8 @@
 #include <sstream>
 #include <string>
 
+#include "../support/temp_dir.h"
+
 namespace tenure::cli::testing {
 
 struct Run {
@@ -24,32 +26,16 @@ struct Run {
   std::string err;
 };
 
-// A fresh directory for one test's files, removed with the object.
-class TempDir {
+// A temporary directory that can also write a file into itself.
+class TempDir : public test_support::TempDir {
  public:
-  TempDir() {
-    static std::atomic<int> counter{0};
-    path_ = std::filesystem::temp_directory_path() /
-            ("tenure_cli_test_" + std::to_string(::getpid()) + "_" + std::to_string(counter++));
-    std::filesystem::create_directories(path_);
-  }
-  ~TempDir() {
-    std::error_code ignored;
-    std::filesystem::remove_all(path_, ignored);
-  }
-  TempDir(const TempDir&) = delete;
-  TempDir& operator=(const TempDir&) = delete;
-
+  TempDir() : test_support::TempDir("tenure_cli_test") {}
   // Writes `text` to a file called `name` here and returns its path.
   std::string write(const std::string& name, const std::string& text) const {
-    const std::filesystem::path file = path_ / name;
+    const std::string file = path(name);
     std::ofstream(file, std::ios::binary) << text;
-    return file.string();
+    return file;
   }
-  std::string path(const std::string& name) const { return (path_ / name).string(); }
-
- private:
-  std::filesystem::path path_;
 };
 
 inline std::string quoted(const std::string& arg) {

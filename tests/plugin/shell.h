@@ -17,6 +17,8 @@
 #include <sstream>
 #include <string>
 
+#include "../support/temp_dir.h"
+
 namespace tenure::plugin::testing {
 
 struct Output {
@@ -26,24 +28,9 @@ struct Output {
 };
 
 // A fresh directory for one test's files, removed with the object.
-class TempDir {
+class TempDir : public test_support::TempDir {
  public:
-  TempDir() {
-    static std::atomic<int> counter{0};
-    path_ = std::filesystem::temp_directory_path() /
-            ("tenure_plugin_test_" + std::to_string(::getpid()) + "_" + std::to_string(counter++));
-    std::filesystem::create_directories(path_);
-  }
-  ~TempDir() {
-    std::error_code ignored;
-    std::filesystem::remove_all(path_, ignored);
-  }
-  TempDir(const TempDir&) = delete;
-  TempDir& operator=(const TempDir&) = delete;
-  std::string path(const std::string& name) const { return (path_ / name).string(); }
-
- private:
-  std::filesystem::path path_;
+  TempDir() : test_support::TempDir("tenure_plugin_test") {}
 };
 
 inline std::string read_text(const std::string& path) {
