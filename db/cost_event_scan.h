@@ -1,24 +1,29 @@
-// Reads the cost-event relation on a second thread (SPEC 9): one thread steps SQLite through
-// the sequential scan and copies each row's three columns into batches; the caller's thread
-// takes the batches and does the parsing, lookups and sums. The two overlap, so the night's
-// cost is close to the scan alone. No row is held beyond its batch; a few batches are in flight.
+// Reads the cost-event relation in one sequential pass (SPEC 9) and hands its rows to the caller
+// in batches of three columns, in scan order.
 //
-//   CostEventScan scan(db, "cost_event");
-//   while (const EventBatch* batch = scan.next()) {
-//     for (const RawEvent& e : batch->rows) use(batch->id(e), batch->date(e), e.amount);
-//     scan.release(batch);
-//   }
+// The pass runs inside a single sqlite3_step of
+//   SELECT count(tenure_cost_event_sink(?1, asset_id, occurred_on, amount)) FROM <relation>
+// where tenure_cost_event_sink is a C function tenure registers on the connection: SQLite calls it
+// once per row with the three values, as it calls length() in the floor query, so no row leaves
+// the virtual machine through the slower column API. The scan object reaches the function as a
+// bound pointer (sqlite3_bind_pointer), and the count it returns is checked against the rows
+// delivered.
+//
+// On a connection without a mutex (tenure's own, or a host's in multi-thread mode) the pass runs
+// on a second thread while `consume` runs on the caller's, so reading and adding up overlap. On a
+// serialized connection the caller may be inside sqlite3_step holding the connection's mutex
+// (SELECT tenure_review(...)), so a second thread could never enter: the pass runs on the
+// caller's thread and `consume` is called from inside it.
+//
+//   scan_cost_events(db, "cost_event", [&](const EventBatch& batch) {
+//     for (const RawEvent& e : batch.rows) use(batch.id(e), batch.date(e), e.amount);
+//   });
 #pragma once
 
-#include <condition_variable>
 #include <cstdint>
-#include <deque>
-#include <exception>
-#include <memory>
-#include <mutex>
+#include <functional>
 #include <string>
 #include <string_view>
-#include <thread>
 #include <vector>
 
 #include "db/connection.h"
@@ -54,37 +59,10 @@ struct EventBatch {
   }
 };
 
-class CostEventScan {
- public:
-  // Starts the scan of `relation` (a checked plain identifier) on its own thread. The connection
-  // must not be used by the caller until the scan has ended (next() returned null).
-  CostEventScan(Connection& db, const std::string& relation);
-  ~CostEventScan();
-  CostEventScan(const CostEventScan&) = delete;
-  CostEventScan& operator=(const CostEventScan&) = delete;
-
-  // The next batch in scan order, or null at the end. Rethrows a failure of the scan.
-  const EventBatch* next();
-  // Hands a batch back for reuse once the caller is done with it.
-  void release(const EventBatch* batch);
-
- private:
-  static constexpr std::size_t kBatchRows = 8192;
-  static constexpr std::size_t kBatches = 4;
-
-  void produce();
-  std::unique_ptr<EventBatch> take_free();
-
-  Statement statement_;
-  std::mutex mutex_;
-  std::condition_variable changed_;
-  std::deque<std::unique_ptr<EventBatch>> ready_;
-  std::vector<std::unique_ptr<EventBatch>> free_;
-  std::unique_ptr<EventBatch> in_use_;
-  bool done_ = false;
-  bool stop_ = false;
-  std::exception_ptr failure_;
-  std::thread thread_;
-};
+// Scans `relation` (a checked plain identifier) and calls `consume` on the caller's thread with
+// every batch, in order. The connection must not be used by anything else until it returns. A
+// failure of the scan or of `consume` is rethrown here once the scan has stopped.
+void scan_cost_events(Connection& db, const std::string& relation,
+                      const std::function<void(const EventBatch&)>& consume);
 
 }  // namespace tenure::db

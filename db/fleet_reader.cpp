@@ -188,14 +188,10 @@ class Reader {
     return std::nullopt;
   }
 
-  // Rule (2), on batches scanned by a second thread (cost_event_scan.h).
+  // Rule (2), on batches of the scan (cost_event_scan.h).
   void read_costs() {
     const std::string& source = policy_.sources.costs;
-    CostEventScan scan(db_, source);
-    while (const EventBatch* batch = scan.next()) {
-      read_cost_batch(source, *batch);
-      scan.release(batch);
-    }
+    scan_cost_events(db_, source, [&](const EventBatch& batch) { read_cost_batch(source, batch); });
   }
 
   void read_cost_batch(const std::string& source, const EventBatch& batch) {
