@@ -51,8 +51,8 @@ std::string summary_table(const db::RunSummary& s) {
   t.add_row({"replace", std::to_string(s.replace)});
   t.add_row({"due (review + replace)", std::to_string(s.due)});
   t.add_row({"newly due", std::to_string(s.newly_due)});
-  t.add_row({"time", fmt::format("read {:.2f} s, analyse {:.2f} s, write {:.2f} s", s.read_seconds,
-                                 s.compute_seconds, s.write_seconds)});
+  t.add_row({"time", fmt::format("read {:.2f} s, analyse and write {:.2f} s, commit {:.2f} s",
+                                 s.read_seconds, s.analyse_write_seconds, s.commit_seconds)});
   return t.render();
 }
 
@@ -65,8 +65,9 @@ nlohmann::json summary_json(const db::RunSummary& s) {
           {"keep", s.keep},               {"review", s.review},
           {"replace", s.replace},         {"due", s.due},
           {"newly_due", s.newly_due},
-          {"seconds", {{"read", s.read_seconds}, {"analyse", s.compute_seconds},
-                       {"write", s.write_seconds}}}};
+          {"seconds", {{"read", s.read_seconds},
+                       {"analyse_and_write", s.analyse_write_seconds},
+                       {"commit", s.commit_seconds}}}};
 }
 
 void run(const ReviewCommandOptions& o, const Console& console) {

@@ -1,9 +1,7 @@
 // Writing one review's results (see results_writer.h).
 #include "db/results_writer.h"
 
-#include <algorithm>
 #include <optional>
-#include <vector>
 
 #include "core/version.h"
 
@@ -21,60 +19,6 @@ std::optional<std::int64_t> esl_on(const replacement::AssetAnalysis& a, Basis ba
   if (basis == Basis::after_tax && !a.after_tax) return std::nullopt;
   return a.on(basis).curve.best_years;
 }
-
-class Writer {
- public:
-  Writer(Connection& db, std::int64_t run_id)
-      : run_id_(run_id),
-        curve_(db, "INSERT INTO tenure_euac_curve(run_id, asset_class, asset_id, role, basis, "
-                   "years, euac, marginal_cost) VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8)"),
-        flow_(db, "INSERT INTO tenure_cash_flow(run_id, asset_class, asset_id, role, year, "
-                  "operating_cost, depreciation, book_value, taxable_income, income_tax, "
-                  "after_tax_cash_flow, market_value, disposal_tax, net_proceeds) VALUES "
-                  "(?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, ?9, ?10, ?11, ?12, ?13, ?14)") {}
-
-  // Curves on both bases and the after-tax cash-flow table of one analysed asset.
-  void detail(const std::string& asset_class, const std::optional<std::string>& asset_id,
-              const char* role, const replacement::AssetAnalysis& a) {
-    for (Basis basis : {Basis::before_tax, Basis::after_tax}) {
-      if (basis == Basis::after_tax && !a.after_tax) continue;
-      const replacement::LifeCurve& curve = a.on(basis).curve;
-      for (std::size_t n = 0; n < curve.euac.size(); ++n) {
-        curve_.bind(1, run_id_);
-        curve_.bind(2, asset_class);
-        curve_.bind(3, asset_id);
-        curve_.bind(4, role);
-        curve_.bind(5, replacement::to_string(basis));
-        curve_.bind(6, static_cast<std::int64_t>(n + 1));
-        curve_.bind(7, curve.euac[n]);
-        curve_.bind(8, curve.marginal_costs[n]);
-        curve_.run();
-      }
-    }
-    for (const replacement::AfterTaxYear& y : a.table.years) {
-      flow_.bind(1, run_id_);
-      flow_.bind(2, asset_class);
-      flow_.bind(3, asset_id);
-      flow_.bind(4, role);
-      flow_.bind(5, static_cast<std::int64_t>(y.kept.year));
-      flow_.bind(6, y.kept.operating_cost);
-      flow_.bind(7, y.kept.depreciation);
-      flow_.bind(8, y.kept.book_value);
-      flow_.bind(9, y.kept.taxable_income);
-      flow_.bind(10, y.kept.income_tax);
-      flow_.bind(11, y.kept.after_tax_cash_flow);
-      flow_.bind(12, y.sale.market_value);
-      flow_.bind(13, y.sale.tax);
-      flow_.bind(14, y.sale.net_proceeds);
-      flow_.run();
-    }
-  }
-
- private:
-  std::int64_t run_id_;
-  Statement curve_;
-  Statement flow_;
-};
 
 std::int64_t insert_run(Connection& db, const RunRecord& run, const review::FleetData&,
                         const review::ReviewResult& result, const ReadReport& report) {
@@ -102,16 +46,35 @@ std::int64_t insert_run(Connection& db, const RunRecord& run, const review::Flee
   return sqlite3_last_insert_rowid(db.handle());
 }
 
-void insert_classes(Connection& db, std::int64_t run_id, const review::ReviewResult& result,
-                    Writer& writer) {
-  Statement q(db,
+}  // namespace
+
+ResultsWriter::ResultsWriter(Connection& db, const RunRecord& run, const review::FleetData& data,
+                             const review::ReviewResult& planned, const ReadReport& report)
+    : db_(db),
+      data_(data),
+      run_id_(insert_run(db, run, data, planned, report)),
+      asset_(db,
+             "INSERT INTO tenure_asset_result(run_id, asset_id, asset_class, age_years, "
+             "first_cost, book_value_now, market_value_now, market_value_source, cost_years, "
+             "cost_ratio, credibility_factor, class_esl_years, defender_best_years, "
+             "defender_euac, challenger_euac, defender_euac_before_tax, defender_euac_after_tax, "
+             "marginal_cost_next_year, replace_after_years, verdict, reason, basis) VALUES "
+             "(?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, ?9, ?10, ?11, ?12, ?13, ?14, ?15, ?16, ?17, "
+             "?18, ?19, ?20, ?21, ?22)"),
+      curve_(db, "INSERT INTO tenure_euac_curve(run_id, asset_class, asset_id, role, basis, "
+                 "years, euac, marginal_cost) VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8)"),
+      flow_(db, "INSERT INTO tenure_cash_flow(run_id, asset_class, asset_id, role, year, "
+                "operating_cost, depreciation, book_value, taxable_income, income_tax, "
+                "after_tax_cash_flow, market_value, disposal_tax, net_proceeds) VALUES "
+                "(?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, ?9, ?10, ?11, ?12, ?13, ?14)") {
+  Statement q(db_,
               "INSERT INTO tenure_class_result(run_id, asset_class, assets, challenger_first_cost, "
               "max_life_years, esl_years_before_tax, euac_before_tax, esl_years_after_tax, "
               "euac_after_tax, cost_model, cost_a, cost_g, cost_r2, asset_years, value_model, "
               "value_start, value_decline, valuations_used, note) VALUES (?1, ?2, ?3, ?4, ?5, "
               "?6, ?7, ?8, ?9, ?10, ?11, ?12, ?13, ?14, ?15, ?16, ?17, ?18, ?19)");
-  for (const review::ClassModel& m : result.classes) {
-    q.bind(1, run_id);
+  for (const review::ClassModel& m : planned.classes) {
+    q.bind(1, run_id_);
     q.bind(2, m.asset_class);
     q.bind(3, static_cast<std::int64_t>(m.assets));
     q.bind(4, m.policy->challenger_first_cost);
@@ -137,32 +100,17 @@ void insert_classes(Connection& db, std::int64_t run_id, const review::ReviewRes
     q.bind(18, static_cast<std::int64_t>(m.value_curve.valuations_used));
     if (!m.note.empty()) q.bind(19, m.note);
     q.run();
-    if (m.challenger) writer.detail(m.asset_class, std::nullopt, "challenger", *m.challenger);
+    if (m.challenger) add_detail(m.asset_class, std::nullopt, "challenger", *m.challenger);
   }
 }
 
-void insert_assets(Connection& db, std::int64_t run_id, const review::FleetData& data,
-                   const review::ReviewResult& result, Writer& writer) {
-  Statement q(db,
-              "INSERT INTO tenure_asset_result(run_id, asset_id, asset_class, age_years, "
-              "first_cost, book_value_now, market_value_now, market_value_source, cost_years, "
-              "cost_ratio, credibility_factor, class_esl_years, defender_best_years, "
-              "defender_euac, challenger_euac, defender_euac_before_tax, defender_euac_after_tax, "
-              "marginal_cost_next_year, replace_after_years, verdict, reason, basis) VALUES "
-              "(?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, ?9, ?10, ?11, ?12, ?13, ?14, ?15, ?16, ?17, "
-              "?18, ?19, ?20, ?21, ?22)");
-  // In asset_id order, so the primary-key index grows at its end instead of everywhere.
-  std::vector<const review::AssetReview*> order;
-  order.reserve(result.assets.size());
-  for (const review::AssetReview& r : result.assets) order.push_back(&r);
-  std::sort(order.begin(), order.end(), [&data](const auto* a, const auto* b) {
-    return data.assets[a->asset].asset_id < data.assets[b->asset].asset_id;
-  });
-  for (const review::AssetReview* review : order) {
-    const review::AssetReview& r = *review;
-    const review::AssetRecord& record = data.assets[r.asset];
+void ResultsWriter::add_assets(std::span<const review::AssetReview> assets) {
+  Statement& q = asset_;
+  // In asset_id order (review::plan_review), so the primary-key index grows at its end.
+  for (const review::AssetReview& r : assets) {
+    const review::AssetRecord& record = data_.assets[r.asset];
     const review::DefenderInputs& in = r.inputs;
-    q.bind(1, run_id);
+    q.bind(1, run_id_);
     q.bind(2, record.asset_id);
     q.bind(3, record.asset_class);
     q.bind(4, in.age_years);
@@ -188,14 +136,14 @@ void insert_assets(Connection& db, std::int64_t run_id, const review::FleetData&
     q.bind(21, r.reason);
     q.bind(22, replacement::to_string(r.basis));
     q.run();
-    if (r.defender) writer.detail(record.asset_class, record.asset_id, "defender", *r.defender);
+    if (r.defender) add_detail(record.asset_class, record.asset_id, "defender", *r.defender);
   }
 }
 
-void insert_rejected(Connection& db, std::int64_t run_id, const ReadReport& report) {
-  Statement q(db, "INSERT INTO tenure_rejected(run_id, source, row_ref, reason) VALUES (?1, ?2, ?3, ?4)");
+void ResultsWriter::add_rejected(const ReadReport& report) {
+  Statement q(db_, "INSERT INTO tenure_rejected(run_id, source, row_ref, reason) VALUES (?1, ?2, ?3, ?4)");
   for (const Rejection& r : report.rejected) {
-    q.bind(1, run_id);
+    q.bind(1, run_id_);
     q.bind(2, r.source);
     q.bind(3, r.row_ref);
     q.bind(4, r.reason);
@@ -203,16 +151,42 @@ void insert_rejected(Connection& db, std::int64_t run_id, const ReadReport& repo
   }
 }
 
-}  // namespace
-
-std::int64_t write_results(Connection& db, const RunRecord& run, const review::FleetData& data,
-                           const review::ReviewResult& result, const ReadReport& report) {
-  const std::int64_t run_id = insert_run(db, run, data, result, report);
-  Writer writer(db, run_id);
-  insert_classes(db, run_id, result, writer);
-  insert_assets(db, run_id, data, result, writer);
-  insert_rejected(db, run_id, report);
-  return run_id;
+void ResultsWriter::add_detail(const std::string& asset_class,
+                               const std::optional<std::string>& asset_id, const char* role,
+                               const replacement::AssetAnalysis& a) {
+  // Curves on both bases and the after-tax cash-flow table of one analysed asset.
+  for (Basis basis : {Basis::before_tax, Basis::after_tax}) {
+    if (basis == Basis::after_tax && !a.after_tax) continue;
+    const replacement::LifeCurve& curve = a.on(basis).curve;
+    for (std::size_t n = 0; n < curve.euac.size(); ++n) {
+      curve_.bind(1, run_id_);
+      curve_.bind(2, asset_class);
+      curve_.bind(3, asset_id);
+      curve_.bind(4, role);
+      curve_.bind(5, replacement::to_string(basis));
+      curve_.bind(6, static_cast<std::int64_t>(n + 1));
+      curve_.bind(7, curve.euac[n]);
+      curve_.bind(8, curve.marginal_costs[n]);
+      curve_.run();
+    }
+  }
+  for (const replacement::AfterTaxYear& y : a.table.years) {
+    flow_.bind(1, run_id_);
+    flow_.bind(2, asset_class);
+    flow_.bind(3, asset_id);
+    flow_.bind(4, role);
+    flow_.bind(5, static_cast<std::int64_t>(y.kept.year));
+    flow_.bind(6, y.kept.operating_cost);
+    flow_.bind(7, y.kept.depreciation);
+    flow_.bind(8, y.kept.book_value);
+    flow_.bind(9, y.kept.taxable_income);
+    flow_.bind(10, y.kept.income_tax);
+    flow_.bind(11, y.kept.after_tax_cash_flow);
+    flow_.bind(12, y.sale.market_value);
+    flow_.bind(13, y.sale.tax);
+    flow_.bind(14, y.sale.net_proceeds);
+    flow_.run();
+  }
 }
 
 }  // namespace tenure::db

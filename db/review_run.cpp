@@ -61,19 +61,25 @@ RunSummary run_review(Connection& db, const ReviewOptions& options) {
   }
   RunSummary summary;
   summary.read_seconds = seconds_since(read_start);
-  const auto compute_start = Clock::now();
-  const review::ReviewResult result = review::review_fleet(data, policy, options.progress);
-  summary.compute_seconds = seconds_since(compute_start);
-  const auto write_start = Clock::now();
+  const auto analyse_start = Clock::now();
+  review::ReviewResult result = review::plan_review(data, policy);
   {
     Transaction tx(db, Transaction::Kind::immediate);
     migrate(db);
     const RunRecord run{as_of.to_iso(), started_at, policy_text, sha256_hex(policy_text), &policy};
-    summary.run_id = write_results(db, run, data, result, report);
+    ResultsWriter writer(db, run, data, result, report);
+    review::analyse_assets(data, policy, result, options.progress,
+                           [&writer](std::span<const review::AssetReview> done) {
+                             writer.add_assets(done);
+                           });
+    writer.add_rejected(report);
+    summary.run_id = writer.run_id();
     if (options.before_commit) options.before_commit();
+    summary.analyse_write_seconds = seconds_since(analyse_start);
+    const auto commit_start = Clock::now();
     tx.commit();
+    summary.commit_seconds = seconds_since(commit_start);
   }
-  summary.write_seconds = seconds_since(write_start);
   summary.as_of = as_of.to_iso();
   summary.rows_read = report.rows_read;
   summary.rows_rejected = static_cast<std::int64_t>(report.rejected.size());

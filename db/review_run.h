@@ -1,9 +1,10 @@
 // The nightly review on one database connection, start to end (SPEC 6 and 7):
 //   1. read the policy (stored or given) and check the input relations and columns exist;
 //   2. read the relations in one read transaction (a consistent snapshot, no lock held after);
-//   3. compute every class and asset (review/), touching no table;
-//   4. write everything in ONE short write transaction: schema migrations, the run, results,
-//      rejected rows. A failure or a kill before its commit leaves the previous results intact.
+//   3. build the class models (review/), touching no table;
+//   4. in ONE write transaction: schema migrations, the run and class rows, then each asset's
+//      result as the analysis (on the other cores) finishes it, then the rejected rows. A
+//      failure or a kill before its commit leaves the previous results intact.
 //
 //   Connection db = Connection::open("fleet.db");
 //   RunSummary s = run_review(db, {.policy_json = text, .as_of = as_of});
@@ -40,8 +41,9 @@ struct RunSummary {
   std::int64_t newly_due = 0;  // due now, not due in the previous successful run
   std::string basis;           // after_tax | before_tax
   std::string money;           // real | nominal
-  // Wall time of the three phases, in seconds.
-  double read_seconds = 0, compute_seconds = 0, write_seconds = 0;
+  // Wall time of the phases, in seconds: reading the inputs; building the models, analysing the
+  // assets and inserting the results (these overlap); the commit.
+  double read_seconds = 0, analyse_write_seconds = 0, commit_seconds = 0;
 };
 
 // Throws InputError for a bad policy, a missing relation or column, or no policy at all;

@@ -41,7 +41,7 @@ void compact(AssetReview& review) {
 
 }  // namespace
 
-ReviewResult review_fleet(const FleetData& data, const Policy& policy, const Progress& progress) {
+ReviewResult plan_review(const FleetData& data, const Policy& policy) {
   std::map<std::string, std::vector<std::size_t>, std::less<>> members;
   for (const auto& [name, class_policy] : policy.classes) members[name];
   for (std::size_t i = 0; i < data.assets.size(); ++i) {
@@ -67,41 +67,86 @@ ReviewResult review_fleet(const FleetData& data, const Policy& policy, const Pro
       in_service.push_back(i);
     }
   }
-  // Each asset's analysis is independent of the others': share them out among the cores. The
-  // progress callback is only called from this thread.
+  // By asset_id: the order the results table's key grows in, so its index is appended to.
+  std::sort(in_service.begin(), in_service.end(), [&data](std::size_t a, std::size_t b) {
+    return data.assets[a].asset_id < data.assets[b].asset_id;
+  });
   result.assets.resize(in_service.size());
-  const std::size_t total = in_service.size();
-  std::atomic<std::size_t> next{0}, done{0};
+  for (std::size_t j = 0; j < in_service.size(); ++j) result.assets[j].asset = in_service[j];
+  return result;
+}
+
+void analyse_assets(const FleetData& data, const Policy& policy, ReviewResult& planned,
+                    const Progress& progress, const AssetsReady& ready) {
+  // Each asset's analysis is independent of the others': chunks of them are shared out among
+  // the cores. This thread hands finished chunks to `ready` in order and, when the next one is
+  // not finished yet, analyses a chunk itself.
+  const std::size_t total = planned.assets.size();
+  const std::size_t chunks = (total + kChunk - 1) / kChunk;
+  std::vector<std::atomic<bool>> finished(chunks);
+  std::atomic<std::size_t> next{0};
+  std::atomic<bool> stop{false};
   std::exception_ptr failure;
   std::mutex failure_mutex;
-  const auto work = [&](bool reports_progress) {
+  const auto fail = [&](std::exception_ptr e) {
+    std::lock_guard lock(failure_mutex);
+    if (!failure) failure = e;
+    stop = true;
+  };
+  // Analyses one chunk; true when it was taken and finished (false: none left, or stopped).
+  const auto analyse_next = [&] {
+    const std::size_t c = next.fetch_add(1);
+    if (c >= chunks) return false;
     try {
-      for (std::size_t k; (k = next.fetch_add(kChunk)) < total;) {
-        for (std::size_t j = k; j < std::min(total, k + kChunk); ++j) {
-          const std::size_t i = in_service[j];
-          AssetReview review =
-              review_asset(i, data, result.class_named(data.assets[i].asset_class), policy);
-          const bool keep_detail = policy.detail == Detail::all ||
-                                   (policy.detail == Detail::due && review.due());
-          if (!keep_detail) compact(review);
-          result.assets[j] = std::move(review);
-        }
-        const std::size_t so_far = done.fetch_add(std::min(kChunk, total - k));
-        if (reports_progress && progress) progress(so_far, total);
+      for (std::size_t j = c * kChunk; j < std::min(total, (c + 1) * kChunk) && !stop; ++j) {
+        const std::size_t i = planned.assets[j].asset;
+        AssetReview review =
+            review_asset(i, data, planned.class_named(data.assets[i].asset_class), policy);
+        const bool keep_detail = policy.detail == Detail::all ||
+                                 (policy.detail == Detail::due && review.due());
+        if (!keep_detail) compact(review);
+        planned.assets[j] = std::move(review);
       }
     } catch (...) {
-      std::lock_guard lock(failure_mutex);
-      if (!failure) failure = std::current_exception();
-      next.store(total);
+      fail(std::current_exception());
     }
+    // Every chunk taken is marked, also after a failure or a stop, so a thread waiting for it
+    // wakes up and sees `stop`.
+    finished[c].store(true, std::memory_order_release);
+    finished[c].notify_all();
+    return !stop;
   };
   const unsigned helpers = std::min(3u, std::max(1u, std::thread::hardware_concurrency()) - 1);
   std::vector<std::thread> threads;
-  for (unsigned t = 0; t < helpers && total > kChunk; ++t) threads.emplace_back(work, false);
-  work(true);
+  for (unsigned t = 0; t < helpers && total > kChunk; ++t) {
+    threads.emplace_back([&] {
+      while (analyse_next()) {
+      }
+    });
+  }
+  try {
+    for (std::size_t delivered = 0; delivered < chunks && !stop;) {
+      if (finished[delivered].load(std::memory_order_acquire)) {
+        if (stop) break;
+        const std::size_t first = delivered * kChunk;
+        const std::size_t count = std::min(kChunk, total - first);
+        if (ready) ready(std::span<const AssetReview>(planned.assets).subspan(first, count));
+        ++delivered;
+        if (progress) progress(first + count, total);
+      } else if (!analyse_next()) {
+        finished[delivered].wait(false, std::memory_order_acquire);
+      }
+    }
+  } catch (...) {
+    fail(std::current_exception());
+  }
   for (auto& thread : threads) thread.join();
   if (failure) std::rethrow_exception(failure);
-  if (progress) progress(done.load(), total);
+}
+
+ReviewResult review_fleet(const FleetData& data, const Policy& policy, const Progress& progress) {
+  ReviewResult result = plan_review(data, policy);
+  analyse_assets(data, policy, result, progress);
   return result;
 }
 
