@@ -1,10 +1,12 @@
 // The fleet's cost history (see cost_history.h). add_event is the nightly hot path (one call per
-// cost event): integer date comparisons, one exp, one add.
+// cost event): integer date comparisons, one exp per day, one rounding, one integer add.
 #include "fleet/cost_history.h"
 
 #include <algorithm>
 #include <cmath>
 #include <limits>
+
+#include <fmt/format.h>
 
 #include "core/errors.h"
 
@@ -26,7 +28,7 @@ CostHistory::AssetIndex CostHistory::add_asset(Date in_service, std::optional<Da
                      retired_on ? retired_on->days_since_epoch()
                                 : std::numeric_limits<std::int32_t>::max(),
                      years, costs_.size()});
-  costs_.resize(costs_.size() + static_cast<std::size_t>(years), 0.0);
+  costs_.resize(costs_.size() + static_cast<std::size_t>(years), 0);
   return static_cast<AssetIndex>(assets_.size() - 1);
 }
 
@@ -49,7 +51,14 @@ EventFate CostHistory::add_event(AssetIndex asset, Date occurred_on, Money amoun
     factor_day_ = occurred_on;
     factor_ = escalation_.factor(occurred_on);
   }
-  costs_[e.first_slot + static_cast<std::size_t>(k - 1)] += amount * factor_;
+  const double restated = amount * factor_;
+  if (!(std::abs(restated) <= kMaxRestated)) {
+    throw InputError("cost_escalation",
+                     fmt::format("restates a cost of {} on {} to {:g}, beyond {:g}", amount,
+                                 occurred_on.to_iso(), restated, kMaxRestated));
+  }
+  costs_[e.first_slot + static_cast<std::size_t>(k - 1)] +=
+      static_cast<Millionths>(std::nearbyint(restated * 1e6));  // rule (2)
   return EventFate::counted;
 }
 
@@ -62,9 +71,28 @@ void CostHistory::prefetch(AssetIndex asset, Date occurred_on) const noexcept {
   }
 }
 
-std::span<const Money> CostHistory::year_costs(AssetIndex asset) const {
+std::vector<Money> CostHistory::year_costs(AssetIndex asset) const {
   const Entry& e = entry(asset);
-  return {costs_.data() + e.first_slot, static_cast<std::size_t>(e.complete_years)};
+  std::vector<Money> totals(static_cast<std::size_t>(e.complete_years));
+  for (std::size_t k = 0; k < totals.size(); ++k) {
+    totals[k] = static_cast<double>(costs_[e.first_slot + k]) / 1e6;
+  }
+  return totals;
+}
+
+CostHistory CostHistory::empty_copy() const {
+  CostHistory copy(as_of(), escalation_.rate());
+  copy.assets_ = assets_;
+  copy.costs_.assign(costs_.size(), 0);
+  return copy;
+}
+
+void CostHistory::merge(const CostHistory& part) {
+  if (part.costs_.size() != costs_.size() || part.assets_.size() != assets_.size() ||
+      part.as_of() != as_of()) {
+    throw RuntimeFailure("cost history merged with a part of other assets");
+  }
+  for (std::size_t i = 0; i < costs_.size(); ++i) costs_[i] += part.costs_[i];
 }
 
 }  // namespace tenure::fleet

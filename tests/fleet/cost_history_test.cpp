@@ -96,6 +96,67 @@ TEST(CostHistory, KeepsAssetsApartInAnyEventOrder) {
   EXPECT_EQ(costs(history, c), (std::vector<Money>{3, 0}));
 }
 
+TEST(CostHistory, SumsAreExactMillionths) {
+  CostHistory history(d("2024-01-01"), 0.0);
+  const auto unit = history.add_asset(d("2020-01-01"), std::nullopt);
+  // Ten dimes make exactly one unit (a running double sum gives 0.9999999999999999).
+  for (int i = 0; i < 10; ++i) history.add_event(unit, d("2020-02-01"), 0.1);
+  // Amounts are rounded to the nearest millionth (ties to even) as they are added.
+  history.add_event(unit, d("2021-02-01"), 0.0000004);
+  history.add_event(unit, d("2021-02-01"), 2.0000006);
+  EXPECT_EQ(costs(history, unit)[0], 1.0);
+  EXPECT_EQ(costs(history, unit)[1], 2.000001);
+}
+
+TEST(CostHistory, PartsMergedEqualOnePassInAnyOrder) {
+  // Invented events (deterministic pseudo-random amounts with cents and restatement) added in
+  // order, in reverse order, and split in two parts that are merged: the totals are identical.
+  CostHistory forward(d("2026-11-30"), 0.031);
+  std::vector<CostHistory::AssetIndex> assets;
+  for (int a = 0; a < 5; ++a) assets.push_back(forward.add_asset(d("2015-04-01"), std::nullopt));
+  CostHistory backward = forward.empty_copy();
+  CostHistory first_half = forward.empty_copy();
+  CostHistory second_half = forward.empty_copy();
+  struct Event { CostHistory::AssetIndex asset; Date day; Money amount; };
+  std::vector<Event> events;
+  std::uint64_t state = 12345;
+  const Date start = d("2015-04-01");
+  for (int i = 0; i < 5000; ++i) {
+    state = state * 6364136223846793005ull + 1442695040888963407ull;
+    const auto asset = assets[(state >> 33) % assets.size()];
+    const Date day = *Date::from_ymd(start.year() + static_cast<int>((state >> 20) % 11),
+                                     1 + static_cast<int>((state >> 12) % 12), 1 + static_cast<int>((state >> 5) % 28));
+    events.push_back({asset, day, static_cast<double>((state >> 40) % 900000) / 100.0 - 1000.0});
+  }
+  for (std::size_t i = 0; i < events.size(); ++i) {
+    forward.add_event(events[i].asset, events[i].day, events[i].amount);
+    const Event& e = events[events.size() - 1 - i];
+    backward.add_event(e.asset, e.day, e.amount);
+    (i < events.size() / 2 ? first_half : second_half).add_event(events[i].asset, events[i].day, events[i].amount);
+  }
+  first_half.merge(second_half);
+  for (const auto asset : assets) {
+    ASSERT_FALSE(costs(forward, asset).empty());
+    EXPECT_EQ(costs(forward, asset), costs(backward, asset));
+    EXPECT_EQ(costs(forward, asset), costs(first_half, asset));
+  }
+  CostHistory other(d("2026-11-30"), 0.031);
+  other.add_asset(d("2015-04-01"), std::nullopt);
+  EXPECT_THROW(forward.merge(other), RuntimeFailure);
+}
+
+TEST(CostHistory, ARestatementBeyondAnyRealCostIsBadEscalation) {
+  // 10^15 (the largest amount the reader accepts) restated at 100% a year over 40 years.
+  CostHistory history(d("2024-01-01"), 1.0);
+  const auto unit = history.add_asset(d("1980-01-01"), std::nullopt);
+  try {
+    history.add_event(unit, d("1984-01-01"), 1e15);
+    FAIL() << "an amount of about 1e27 was added";
+  } catch (const InputError& e) {
+    EXPECT_EQ(e.where(), "cost_escalation");
+  }
+}
+
 TEST(CostHistory, RejectsBadAssetsAndIndexes) {
   CostHistory history(d("2024-01-01"), 0.0);
   EXPECT_THROW(history.add_asset(d("2020-01-01"), d("2019-12-31")), InputError);
