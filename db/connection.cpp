@@ -34,6 +34,19 @@ Connection Connection::open_existing(const std::string& path, const std::string&
 
 Connection Connection::borrow(sqlite3* handle) { return Connection(handle, false); }
 
+Connection Connection::open_reader(const std::string& path) {
+  sqlite3* handle = nullptr;
+  const int rc = sqlite3_open_v2(path.c_str(), &handle, SQLITE_OPEN_READONLY | SQLITE_OPEN_NOMUTEX,
+                                 nullptr);
+  if (rc != SQLITE_OK) {
+    std::string message = handle ? sqlite3_errmsg(handle) : sqlite3_errstr(rc);
+    sqlite3_close(handle);
+    throw RuntimeFailure("cannot open database '" + path + "' to read: " + message);
+  }
+  sqlite3_extended_result_codes(handle, 1);
+  return Connection(handle, true);
+}
+
 Connection::Connection(Connection&& other) noexcept : handle_(other.handle_), owned_(other.owned_) {
   other.handle_ = nullptr;
   other.owned_ = false;

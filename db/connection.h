@@ -29,6 +29,9 @@ class Connection {
   static Connection open_existing(const std::string& path, const std::string& option);
   // Wraps a connection the caller owns (the extension's, a host's); not closed here.
   static Connection borrow(sqlite3* handle);
+  // A second, read-only connection to a database file tenure already has open, for reading in
+  // parallel (cost_ranges.h). It never waits for a lock: SQLITE_BUSY comes back at once.
+  static Connection open_reader(const std::string& path);
 
   Connection(Connection&& other) noexcept;
   Connection& operator=(Connection&&) = delete;
@@ -36,6 +39,8 @@ class Connection {
   ~Connection();
 
   sqlite3* handle() const { return handle_; }
+  // True when tenure opened this connection (open, open_existing, open_reader), not borrow.
+  bool owned() const { return owned_; }
   // Runs one or more statements without results; throws on failure.
   void exec(std::string_view sql);
   bool in_transaction() const { return sqlite3_get_autocommit(handle_) == 0; }

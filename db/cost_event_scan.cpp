@@ -212,12 +212,22 @@ std::int64_t run_pass(Statement& pass) {
 
 }  // namespace
 
-void scan_cost_events(Connection& db, const std::string& relation,
+void scan_cost_events(Connection& db, const std::string& relation, const ScanOptions& options,
                       const std::function<void(const EventBatch&)>& consume) {
   register_sink(db);
-  Statement pass(db, fmt::format("SELECT count({}(?1, asset_id, occurred_on, amount)) FROM {}",
-                                 kSinkName, quoted(relation)));
-  const bool threaded = sqlite3_db_mutex(db.handle()) == nullptr;
+  std::string sql = fmt::format("SELECT count({}(?1, asset_id, occurred_on, amount)) FROM {}",
+                                kSinkName, quoted(relation));
+  std::vector<std::string> bounds;
+  if (!options.rowid_name.empty()) {
+    const std::string rowid = quoted(options.rowid_name);
+    if (options.after) bounds.push_back(rowid + " > ?2");
+    if (options.through) bounds.push_back(rowid + " <= ?3");
+  }
+  for (std::size_t i = 0; i < bounds.size(); ++i) sql.append(i == 0 ? " WHERE " : " AND ").append(bounds[i]);
+  Statement pass(db, sql);
+  if (options.after && !options.rowid_name.empty()) pass.bind(2, *options.after);
+  if (options.through && !options.rowid_name.empty()) pass.bind(3, *options.through);
+  const bool threaded = options.overlap && sqlite3_db_mutex(db.handle()) == nullptr;
   EventScan scan(consume, threaded);
   if (sqlite3_bind_pointer(pass.handle(), 1, &scan, kPointerType, nullptr) != SQLITE_OK) {
     throw RuntimeFailure(fmt::format("cannot bind the scan to {}", kSinkName));

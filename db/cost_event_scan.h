@@ -9,19 +9,21 @@
 // bound pointer (sqlite3_bind_pointer), and the count it returns is checked against the rows
 // delivered.
 //
-// On a connection without a mutex (tenure's own, or a host's in multi-thread mode) the pass runs
-// on a second thread while `consume` runs on the caller's, so reading and adding up overlap. On a
-// serialized connection the caller may be inside sqlite3_step holding the connection's mutex
-// (SELECT tenure_review(...)), so a second thread could never enter: the pass runs on the
-// caller's thread and `consume` is called from inside it.
+// With `overlap`, on a connection without a mutex (tenure's own, or a host's in multi-thread
+// mode), the pass runs on a second thread while `consume` runs on the caller's, so reading and
+// adding up overlap. Otherwise the pass runs on the caller's thread and `consume` is called from
+// inside it: always so on a serialized connection, where the caller may be inside sqlite3_step
+// holding the connection's mutex (SELECT tenure_review(...)) and a second thread could never
+// enter. A scan may be limited to a rowid range, to read a table in parts at once (cost_ranges.h).
 //
-//   scan_cost_events(db, "cost_event", [&](const EventBatch& batch) {
+//   scan_cost_events(db, "cost_event", {}, [&](const EventBatch& batch) {
 //     for (const RawEvent& e : batch.rows) use(batch.id(e), batch.date(e), e.amount);
 //   });
 #pragma once
 
 #include <cstdint>
 #include <functional>
+#include <optional>
 #include <string>
 #include <string_view>
 #include <vector>
@@ -59,10 +61,19 @@ struct EventBatch {
   }
 };
 
+struct ScanOptions {
+  // Only the rows whose rowid (as `rowid_name`, a name the relation has no column of) is in
+  // (after, through]; every row when rowid_name is empty. Rows come in rowid order either way.
+  std::string rowid_name;
+  std::optional<std::int64_t> after, through;
+  // Scan on a second thread while the caller consumes, when the connection allows it.
+  bool overlap = true;
+};
+
 // Scans `relation` (a checked plain identifier) and calls `consume` on the caller's thread with
 // every batch, in order. The connection must not be used by anything else until it returns. A
 // failure of the scan or of `consume` is rethrown here once the scan has stopped.
-void scan_cost_events(Connection& db, const std::string& relation,
+void scan_cost_events(Connection& db, const std::string& relation, const ScanOptions& options,
                       const std::function<void(const EventBatch&)>& consume);
 
 }  // namespace tenure::db

@@ -2,8 +2,11 @@
 #include "db/fleet_reader.h"
 
 #include <cmath>
+#include <exception>
+#include <optional>
 #include <string_view>
 #include <unordered_map>
+#include <thread>
 #include <unordered_set>
 
 #include <fmt/format.h>
@@ -11,6 +14,9 @@
 #include "core/checks.h"
 #include "core/errors.h"
 #include "db/cost_event_scan.h"
+#include "db/cost_ranges.h"
+#include "db/cost_rows.h"
+#include "db/row_checks.h"
 #include "fleet/asset_index.h"
 
 namespace tenure::db {
@@ -24,34 +30,6 @@ struct RequiredColumns {
   const char* key;  // in $.sources
   const std::string* relation;
   std::vector<const char*> columns;
-};
-
-// Transparent hashing so a column's text is looked up without building a std::string.
-struct IdHash {
-  using is_transparent = void;
-  std::size_t operator()(std::string_view s) const noexcept {
-    return std::hash<std::string_view>{}(s);
-  }
-};
-using IdSet = std::unordered_set<std::string, IdHash, std::equal_to<>>;
-
-// Cost events arrive in date order, so most rows repeat the previous row's date text: parse it
-// once per distinct text.
-class DateMemo {
- public:
-  std::optional<Date> parse(std::string_view text) {
-    if (text.size() > sizeof(text_)) return parse_iso_date(text);  // never valid; not kept
-    if (text != std::string_view(text_, length_)) {
-      length_ = text.copy(text_, sizeof(text_));
-      date_ = parse_iso_date(text);
-    }
-    return date_;
-  }
-
- private:
-  char text_[16] = {};
-  std::size_t length_ = 0;
-  std::optional<Date> date_;
 };
 
 bool valid_utf8(std::string_view s) {
@@ -68,27 +46,10 @@ bool valid_utf8(std::string_view s) {
   return true;
 }
 
-// Text for a row reference or reason: quoted, shortened, with control bytes shown safely.
-std::string shown(std::string_view s) {
-  std::string out = "'";
-  for (std::size_t i = 0; i < s.size() && i < 64; ++i) {
-    const auto c = static_cast<unsigned char>(s[i]);
-    out += c < 0x20 || c == 0x7F ? '?' : static_cast<char>(c);
-  }
-  if (s.size() > 64) out += "...";
-  return out + "'";
-}
-
 // A column's value as text for messages, whatever its storage class.
 std::string shown_value(const Statement& q, int column) {
   if (q.is_null(column)) return "NULL";
   return shown(q.text(column));
-}
-
-// An amount of rules (1)-(3) beyond kMaxAmount, or nullopt.
-std::optional<std::string> magnitude_problem(double amount, const char* name) {
-  if (std::abs(amount) <= kMaxAmount) return std::nullopt;
-  return fmt::format("{} {} is larger in magnitude than {:g}", name, amount, kMaxAmount);
 }
 
 // Rule (1)-(3) amounts: stored as a number (text that SQLite could not convert stays text, and
@@ -114,8 +75,8 @@ std::string bad_date(const Statement& q, int column, const char* name) {
 
 class Reader {
  public:
-  Reader(Connection& db, const review::Policy& policy, FleetData& data)
-      : db_(db), policy_(policy), data_(data) {}
+  Reader(Connection& db, const review::Policy& policy, FleetData& data, std::int64_t split_min_rows)
+      : db_(db), policy_(policy), data_(data), split_min_rows_(split_min_rows) {}
 
   ReadReport run() {
     read_assets();
@@ -142,14 +103,14 @@ class Reader {
       const std::string ref = q.is_null(0) ? fmt::format("row {}", row)
                                            : fmt::format("row {} (asset_id {})", row, shown(id));
       const auto fail = [&](std::string reason) {
-        if (!q.is_null(0) && !id.empty()) rejected_ids_.emplace(id);
+        if (!q.is_null(0) && !id.empty()) accepted_.rejected_ids.emplace(id);
         reject(source, ref, std::move(reason));
       };
       // Rule (1).
       if (q.is_null(0) || id.empty()) { fail("asset_id is missing"); continue; }
       if (!valid_utf8(id)) { fail("asset_id is not valid UTF-8"); continue; }
       if (id.size() > kMaxIdBytes) { fail(fmt::format("asset_id is longer than {} bytes", kMaxIdBytes)); continue; }
-      if (index_.contains(id)) {
+      if (accepted_.index.contains(id)) {
         reject(source, ref, fmt::format("duplicate asset_id {}: the first row with it is used", shown(id)));
         continue;
       }
@@ -171,106 +132,47 @@ class Reader {
       }
       const auto index = data_.add_asset(
           {std::string(id), std::string(asset_class), *in_service, q.real(3), retired});
-      index_.insert(id, index);
+      accepted_.index.insert(id, index);
     }
   }
 
-  // The accepted asset an event or valuation names, or a rejection reason (rules 2 and 3).
-  std::optional<std::uint32_t> find_asset(std::string_view id, bool is_null, std::string& reason) const {
-    if (is_null || id.empty()) {
-      reason = "asset_id is missing";
-      return std::nullopt;
-    }
-    if (const auto index = index_.find(id); index != fleet::AssetIndex::npos) return index;
-    reason = rejected_ids_.contains(id)
-                 ? fmt::format("asset {} was rejected (see its row in the asset relation)", shown(id))
-                 : fmt::format("asset_id {} is not in the asset relation", shown(id));
-    return std::nullopt;
-  }
-
-  // Rule (2), on batches of the scan (cost_event_scan.h).
+  // Rule (2), in one pass or in two halves at once (cost_ranges.h).
   void read_costs() {
     const std::string& source = policy_.sources.costs;
-    scan_cost_events(db_, source, [&](const EventBatch& batch) { read_cost_batch(source, batch); });
-  }
-
-  void read_cost_batch(const std::string& source, const EventBatch& batch) {
-    // Passes over the whole batch so the scattered memory reads of neighbouring rows overlap:
-    // hash every id and prefetch its index slot; look every id up and prefetch its cost history;
-    // parse every date and prefetch the year total it adds to; then read the rows in order.
-    const std::size_t n = batch.rows.size();
-    hashes_.resize(n);
-    assets_.resize(n);
-    days_.resize(n);
-    for (std::size_t i = 0; i < n; ++i) {
-      hashes_[i] = fleet::AssetIndex::hash(batch.id(batch.rows[i]));
-      index_.prefetch(hashes_[i]);
+    const auto split = plan_split(db_, source, split_min_rows_);
+    if (!split) {
+      CostRows rows(source, accepted_, data_, data_.costs);
+      scan_cost_events(db_, source, {}, [&](const EventBatch& batch) { rows.read(batch); });
+      std::move(rows).finish(report_, 0);
+      return;
     }
-    for (std::size_t i = 0; i < n; ++i) {
-      assets_[i] = index_.find(batch.id(batch.rows[i]), hashes_[i]);
-      data_.costs.prefetch(assets_[i]);
-    }
-    for (std::size_t i = 0; i < n; ++i) {
-      const RawEvent& e = batch.rows[i];
-      days_[i] = e.date_type == SQLITE_TEXT ? dates_.parse(batch.date(e)) : std::nullopt;
-      if (days_[i]) data_.costs.prefetch(assets_[i], *days_[i]);
-    }
-    std::string reason;
-    std::int64_t row = batch.first_row - 1;
-    for (std::size_t i = 0; i < n; ++i) {
-      const RawEvent& e = batch.rows[i];
-      ++row;
-      ++report_.rows_read;
-      const auto shown_or_null = [](std::uint8_t type, std::string_view text) {
-        return type == SQLITE_NULL ? std::string("NULL") : shown(text);
-      };
-      const auto ref = [&] {
-        return fmt::format("row {} (asset_id {}, occurred_on {})", row,
-                           shown_or_null(e.id_type, batch.id(e)),
-                           shown_or_null(e.date_type, batch.date(e)));
-      };
-      const auto asset = e.id_type != SQLITE_NULL && assets_[i] != fleet::AssetIndex::npos
-                             ? std::optional<std::uint32_t>(assets_[i])
-                             : find_asset(batch.id(e), e.id_type == SQLITE_NULL, reason);
-      if (!asset) { reject(source, ref(), reason); continue; }
-      const std::optional<Date>& occurred = days_[i];
-      if (!occurred) {
-        reject(source, ref(), fmt::format("occurred_on {} is not a valid date (YYYY-MM-DD)",
-                                          shown_or_null(e.date_type, batch.date(e))));
-        continue;
-      }
-      if (e.amount_type == SQLITE_NULL) { reject(source, ref(), "amount is missing"); continue; }
-      if (e.amount_type != SQLITE_INTEGER && e.amount_type != SQLITE_FLOAT) {
-        reject(source, ref(), fmt::format("amount {} is not a number", shown(batch.amount_text(e))));
-        continue;
-      }
-      if (std::isfinite(e.amount)) {
-        if (auto problem = magnitude_problem(e.amount, "amount")) {
-          reject(source, ref(), *problem);
-          continue;
+    fleet::CostHistory second_totals = data_.costs.empty_copy();
+    CostRows first(source, accepted_, data_, data_.costs);
+    CostRows second(source, accepted_, data_, second_totals);
+    const auto read_half = [&](Connection& db, const ScanOptions& half, CostRows& rows) {
+      scan_cost_events(db, source, half, [&](const EventBatch& batch) { rows.read(batch); });
+    };
+    bool second_read = false;
+    std::exception_ptr second_failure;
+    {
+      std::jthread helper([&] {
+        try {
+          if (std::optional<Connection> reader = open_second_reader(*split)) {
+            read_half(*reader, split->second_half(), second);
+            second_read = true;
+          }
+        } catch (...) {
+          second_failure = std::current_exception();
         }
-      }
-      if (*occurred > data_.as_of) {  // rule (4)
-        ++report_.rows_after_as_of;
-        continue;
-      }
-      switch (data_.costs.add_event(*asset, *occurred, e.amount)) {
-        case fleet::EventFate::counted:
-        case fleet::EventFate::outside_complete_years:
-          break;
-        case fleet::EventFate::before_in_service:
-          reject(source, ref(), fmt::format("occurred_on is before the asset's in_service_on {}",
-                                            data_.assets[*asset].in_service.to_iso()));
-          break;
-        case fleet::EventFate::after_retirement:
-          reject(source, ref(), fmt::format("occurred_on is after the asset's retired_on {}",
-                                            data_.assets[*asset].retired_on->to_iso()));
-          break;
-        case fleet::EventFate::non_finite_amount:
-          reject(source, ref(), "amount is not a finite number");
-          break;
-      }
+      });
+      read_half(db_, split->first_half(), first);
     }
+    if (second_failure) std::rethrow_exception(second_failure);
+    if (!second_read) read_half(db_, split->second_half(), second);
+    data_.costs.merge(second_totals);
+    const std::int64_t first_rows = first.rows();
+    std::move(first).finish(report_, 0);
+    std::move(second).finish(report_, first_rows);
   }
 
   void read_valuations() {
@@ -285,9 +187,9 @@ class Reader {
         return fmt::format("row {} (asset_id {}, valued_on {})", row, shown_value(q, 0),
                            shown_value(q, 1));
       };
-      const auto asset = find_asset(q.text(0), q.is_null(0), reason);
-      if (!asset) { reject(source, ref(), reason); continue; }
-      const review::AssetRecord& record = data_.assets[*asset];
+      const std::uint32_t asset = accepted_.find(q.text(0), q.is_null(0), reason);
+      if (asset == fleet::AssetIndex::npos) { reject(source, ref(), reason); continue; }
+      const review::AssetRecord& record = data_.assets[asset];
       const auto valued = date_column(q, 1);
       if (!valued) { reject(source, ref(), bad_date(q, 1, "valued_on")); continue; }
       if (auto problem = number_problem(q, 2, "amount")) { reject(source, ref(), *problem); continue; }
@@ -306,20 +208,16 @@ class Reader {
         ++report_.rows_after_as_of;
         continue;
       }
-      data_.valuations[*asset].push_back({*valued, q.real(2)});
+      data_.valuations[asset].push_back({*valued, q.real(2)});
     }
   }
 
   Connection& db_;
   const review::Policy& policy_;
   FleetData& data_;
+  std::int64_t split_min_rows_;
   ReadReport report_;
-  fleet::AssetIndex index_;
-  DateMemo dates_;
-  std::vector<std::uint64_t> hashes_;  // per row of the batch being read
-  std::vector<std::uint32_t> assets_;
-  std::vector<std::optional<Date>> days_;
-  IdSet rejected_ids_;
+  AcceptedAssets accepted_;
 };
 
 }  // namespace
@@ -353,8 +251,9 @@ void check_sources(Connection& db, const review::Sources& sources) {
   }
 }
 
-ReadReport read_fleet(Connection& db, const review::Policy& policy, FleetData& data) {
-  return Reader(db, policy, data).run();
+ReadReport read_fleet(Connection& db, const review::Policy& policy, FleetData& data,
+                      std::int64_t split_min_rows) {
+  return Reader(db, policy, data, split_min_rows).run();
 }
 
 }  // namespace tenure::db

@@ -31,12 +31,12 @@
 #include <vector>
 
 #include "db/connection.h"
+#include "db/cost_ranges.h"
+#include "db/row_checks.h"
 #include "review/fleet_data.h"
 #include "review/policy.h"
 
 namespace tenure::db {
-
-inline constexpr double kMaxAmount = 1e15;
 
 struct Rejection {
   std::string source;   // the relation as named by the policy's sources
@@ -53,7 +53,10 @@ struct ReadReport {
 // Throws InputError naming "$.sources.<key>" when a relation or one of its columns is missing.
 void check_sources(Connection& db, const review::Sources& sources);
 
-// Fills `data` (constructed with the as-of date and cost escalation) from the three relations.
-ReadReport read_fleet(Connection& db, const review::Policy& policy, review::FleetData& data);
+// Fills `data` (constructed with the as-of date and cost escalation) from the three relations,
+// inside the caller's read transaction. A cost-event table whose rowids span at least
+// `split_min_rows` is read in two halves at once where that is safe (cost_ranges.h).
+ReadReport read_fleet(Connection& db, const review::Policy& policy, review::FleetData& data,
+                      std::int64_t split_min_rows = kSplitMinRows);
 
 }  // namespace tenure::db

@@ -56,7 +56,7 @@ RunSummary run_review(Connection& db, const ReviewOptions& options) {
     // One read transaction: a consistent snapshot of the three relations.
     Transaction snapshot(db, Transaction::Kind::deferred);
     check_sources(db, policy.sources);
-    report = read_fleet(db, policy, data);
+    report = read_fleet(db, policy, data, options.split_min_rows);
     snapshot.commit();
   }
   RunSummary summary;

@@ -17,6 +17,7 @@
 #include <string>
 
 #include "db/connection.h"
+#include "db/cost_ranges.h"
 #include "fleet/date.h"
 #include "review/fleet_review.h"
 
@@ -27,6 +28,9 @@ struct ReviewOptions {
   std::optional<Date> as_of;               // nullopt: today (UTC)
   review::Progress progress;               // optional progress callback
   std::function<void()> before_commit;     // optional hook, called just before COMMIT
+  // A cost-event table whose rowids span at least this many is read in two halves at once
+  // where that is safe (cost_ranges.h); tests lower it to read small tables so.
+  std::int64_t split_min_rows = kSplitMinRows;
 };
 
 struct RunSummary {

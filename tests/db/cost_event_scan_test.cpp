@@ -65,7 +65,7 @@ std::string described(const EventBatch& batch, const RawEvent& e) {
 
 std::vector<std::string> scanned(Connection& db, const std::string& relation) {
   std::vector<std::string> rows;
-  scan_cost_events(db, relation, [&](const EventBatch& batch) {
+  scan_cost_events(db, relation, {}, [&](const EventBatch& batch) {
     EXPECT_EQ(batch.first_row, static_cast<std::int64_t>(rows.size()) + 1);
     for (const RawEvent& e : batch.rows) rows.push_back(described(batch, e));
   });
@@ -142,7 +142,7 @@ TEST(CostEventScan, AFailureWhileConsumingStopsTheScanAndReachesTheCaller) {
   Connection own = file.open();
   for (Connection* db : {&own, &serialized}) {
     int batches = 0;
-    EXPECT_THROW(scan_cost_events(*db, "cost_event",
+    EXPECT_THROW(scan_cost_events(*db, "cost_event", {},
                                   [&](const EventBatch&) {
                                     if (++batches == 2) throw std::runtime_error("consumer gave up");
                                   }),

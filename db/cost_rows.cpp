@@ -1,0 +1,111 @@
+// Rule (2) for the rows of one scan of the cost events (see cost_rows.h).
+#include "db/cost_rows.h"
+
+#include <cmath>
+#include <utility>
+
+#include <fmt/format.h>
+
+namespace tenure::db {
+
+std::optional<Date> CostRows::DateMemo::parse(std::string_view text) {
+  if (text.size() > sizeof(text_)) return parse_iso_date(text);  // never valid; not kept
+  if (text != std::string_view(text_, length_)) {
+    length_ = text.copy(text_, sizeof(text_));
+    date_ = parse_iso_date(text);
+  }
+  return date_;
+}
+
+CostRows::CostRows(std::string source, const AcceptedAssets& accepted,
+                   const review::FleetData& data, fleet::CostHistory& totals)
+    : source_(std::move(source)), accepted_(accepted), data_(data), totals_(totals) {}
+
+void CostRows::read(const EventBatch& batch) {
+  // Passes over the whole batch so the scattered memory reads of neighbouring rows overlap:
+  // hash every id and prefetch its index slot; look every id up and prefetch its cost history;
+  // parse every date and prefetch the year total it adds to; then read the rows in order.
+  const fleet::AssetIndex& index = accepted_.index;
+  const std::size_t n = batch.rows.size();
+  hashes_.resize(n);
+  assets_.resize(n);
+  days_.resize(n);
+  for (std::size_t i = 0; i < n; ++i) {
+    hashes_[i] = fleet::AssetIndex::hash(batch.id(batch.rows[i]));
+    index.prefetch(hashes_[i]);
+  }
+  for (std::size_t i = 0; i < n; ++i) {
+    assets_[i] = index.find(batch.id(batch.rows[i]), hashes_[i]);
+    totals_.prefetch(assets_[i]);
+  }
+  for (std::size_t i = 0; i < n; ++i) {
+    const RawEvent& e = batch.rows[i];
+    days_[i] = e.date_type == SQLITE_TEXT ? dates_.parse(batch.date(e)) : std::nullopt;
+    if (days_[i]) totals_.prefetch(assets_[i], *days_[i]);
+  }
+  std::string reason;
+  for (std::size_t i = 0; i < n; ++i) {
+    const RawEvent& e = batch.rows[i];
+    ++rows_;
+    const auto shown_or_null = [](std::uint8_t type, std::string_view text) {
+      return type == SQLITE_NULL ? std::string("NULL") : shown(text);
+    };
+    const auto reject = [&](std::string why) {
+      rejected_.push_back({rows_,
+                           fmt::format("(asset_id {}, occurred_on {})",
+                                       shown_or_null(e.id_type, batch.id(e)),
+                                       shown_or_null(e.date_type, batch.date(e))),
+                           std::move(why)});
+    };
+    std::uint32_t asset = e.id_type != SQLITE_NULL ? assets_[i] : fleet::AssetIndex::npos;
+    if (asset == fleet::AssetIndex::npos) {
+      asset = accepted_.find(batch.id(e), e.id_type == SQLITE_NULL, reason);
+      if (asset == fleet::AssetIndex::npos) { reject(reason); continue; }
+    }
+    const std::optional<Date>& occurred = days_[i];
+    if (!occurred) {
+      reject(fmt::format("occurred_on {} is not a valid date (YYYY-MM-DD)",
+                         shown_or_null(e.date_type, batch.date(e))));
+      continue;
+    }
+    if (e.amount_type == SQLITE_NULL) { reject("amount is missing"); continue; }
+    if (e.amount_type != SQLITE_INTEGER && e.amount_type != SQLITE_FLOAT) {
+      reject(fmt::format("amount {} is not a number", shown(batch.amount_text(e))));
+      continue;
+    }
+    if (std::isfinite(e.amount)) {
+      if (auto problem = magnitude_problem(e.amount, "amount")) { reject(*problem); continue; }
+    }
+    if (*occurred > data_.as_of) {  // rule (4)
+      ++rows_after_as_of_;
+      continue;
+    }
+    switch (totals_.add_event(asset, *occurred, e.amount)) {
+      case fleet::EventFate::counted:
+      case fleet::EventFate::outside_complete_years:
+        break;
+      case fleet::EventFate::before_in_service:
+        reject(fmt::format("occurred_on is before the asset's in_service_on {}",
+                           data_.assets[asset].in_service.to_iso()));
+        break;
+      case fleet::EventFate::after_retirement:
+        reject(fmt::format("occurred_on is after the asset's retired_on {}",
+                           data_.assets[asset].retired_on->to_iso()));
+        break;
+      case fleet::EventFate::non_finite_amount:
+        reject("amount is not a finite number");
+        break;
+    }
+  }
+}
+
+void CostRows::finish(ReadReport& report, std::int64_t rows_before) && {
+  report.rows_read += rows_;
+  report.rows_after_as_of += rows_after_as_of_;
+  for (Rejected& r : rejected_) {
+    report.rejected.push_back(
+        {source_, fmt::format("row {} {}", rows_before + r.row, r.keys), std::move(r.reason)});
+  }
+}
+
+}  // namespace tenure::db
