@@ -3,6 +3,8 @@
 #include "interest/factors.h"
 
 #include <algorithm>
+#include <array>
+#include <bitset>
 #include <cctype>
 #include <cmath>
 #include <string>
@@ -33,22 +35,65 @@ double growth_minus_one(Rate i, double n) { return std::expm1(n * std::log1p(i))
 // written with it give their limits there instead of inf / inf = NaN.
 double one_minus_discount(Rate i, double n) { return -std::expm1(-n * std::log1p(i)); }
 
+// The nightly review asks for the same factors at one or two rates (before and after tax) and
+// n = 1, 2, ... for every asset of a fleet. Each thread keeps the values of its last two rates
+// at whole n below kMemoPeriods, computed by the very expression a miss evaluates, so a hit
+// returns the same bits the computation would.
+constexpr std::size_t kMemoPeriods = 256;
+
+class PeriodMemo {
+ public:
+  template <class Compute>
+  double get(Rate i, double n, Compute compute) {
+    if (!(n >= 0 && n < kMemoPeriods) || n != std::floor(n)) return compute();
+    const auto k = static_cast<std::size_t>(n);
+    Rates* entry = nullptr;
+    for (Rates& e : entries_) {
+      if (e.used && e.rate == i) entry = &e;
+    }
+    if (!entry) {
+      entry = &entries_[next_];
+      next_ = (next_ + 1) % entries_.size();
+      *entry = Rates{};
+      entry->used = true;
+      entry->rate = i;
+    }
+    if (!entry->known[k]) {
+      entry->value[k] = compute();
+      entry->known[k] = true;
+    }
+    return entry->value[k];
+  }
+
+ private:
+  struct Rates {
+    bool used = false;
+    Rate rate = 0;
+    std::array<double, kMemoPeriods> value{};
+    std::bitset<kMemoPeriods> known;
+  };
+  std::array<Rates, 2> entries_{};
+  std::size_t next_ = 0;
+};
+
+thread_local PeriodMemo pf_memo, fp_memo, pa_memo;
+
 }  // namespace
 
 double pf(Rate i, double n) {
   check(i, n, false);
-  return std::exp(-n * std::log1p(i));
+  return pf_memo.get(i, n, [&] { return std::exp(-n * std::log1p(i)); });
 }
 
 double fp(Rate i, double n) {
   check(i, n, false);
-  return std::exp(n * std::log1p(i));
+  return fp_memo.get(i, n, [&] { return std::exp(n * std::log1p(i)); });
 }
 
 double pa(Rate i, double n) {
   check(i, n, false);
   if (i == 0) return n;
-  return one_minus_discount(i, n) / i;
+  return pa_memo.get(i, n, [&] { return one_minus_discount(i, n) / i; });
 }
 
 double fa(Rate i, double n) {

@@ -95,8 +95,8 @@ class KilledReview : public ::testing::Test {
     }
     // The second run left to finish: what a run killed after its commit must equal.
     copy_database(templ->path(), reference->path());
-    // Timed in a child, as the killed runs are: when its analysis ends (the last progress
-    // call) the write transaction starts.
+    // Timed in a child, as the killed runs are: its write transaction has begun by the first
+    // progress call (results are inserted as the analysis goes).
     const auto start = std::chrono::steady_clock::now();
     const pid_t child = fork();
     if (child == 0) {
@@ -107,7 +107,10 @@ class KilledReview : public ::testing::Test {
       };
       std::int64_t write_starts = 0;
       run_review(db, {std::nullopt, parse_iso_date(kSecondAsOf),
-                      [&](std::size_t, std::size_t) { write_starts = written(); }, {}});
+                      [&](std::size_t, std::size_t) {
+                        if (write_starts == 0) write_starts = written();
+                      },
+                      {}});
       // The parent reads the phase times from the database file's neighbour.
       std::FILE* out = std::fopen((reference->path() + ".times").c_str(), "w");
       std::fprintf(out, "%lld %lld\n", static_cast<long long>(write_starts),

@@ -330,5 +330,21 @@ TEST(Names, FactorDispatchesToTheNamedFunction) {
   EXPECT_EQ(factor(Kind::pg, 0.1, 7), pg(0.1, 7));
 }
 
+TEST(Memo, RemembersValuesBitForBitAcrossRatesAndPeriods) {
+  // The per-thread memo of pf, fp and pa (factors.cpp) must return exactly what the closed forms
+  // give, also when more rates alternate than it keeps, at fractional n and beyond its periods.
+  const std::vector<double> rates = {0.05, 0.0712, 0.09, 0.05, -0.02};
+  for (int round = 0; round < 2; ++round) {
+    for (double n = 0; n <= 300; n += 0.5) {
+      for (double i : rates) {
+        ASSERT_EQ(pf(i, n), std::exp(-n * std::log1p(i))) << i << " " << n;
+        ASSERT_EQ(fp(i, n), std::exp(n * std::log1p(i))) << i << " " << n;
+        ASSERT_EQ(pa(i, n), -std::expm1(-n * std::log1p(i)) / i) << i << " " << n;
+      }
+    }
+  }
+  EXPECT_THROW(pf(-1.5, 3), InputError) << "bad input is checked before the memo";
+}
+
 }  // namespace
 }  // namespace tenure::interest
