@@ -5,7 +5,6 @@
 #include <exception>
 #include <optional>
 #include <string_view>
-#include <unordered_map>
 #include <thread>
 #include <unordered_set>
 
