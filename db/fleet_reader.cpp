@@ -31,20 +31,6 @@ struct RequiredColumns {
   std::vector<const char*> columns;
 };
 
-bool valid_utf8(std::string_view s) {
-  std::size_t i = 0;
-  while (i < s.size()) {
-    const auto c = static_cast<unsigned char>(s[i]);
-    std::size_t len = c < 0x80 ? 1 : (c >> 5) == 0x6 ? 2 : (c >> 4) == 0xE ? 3 : (c >> 3) == 0x1E ? 4 : 0;
-    if (len == 0 || i + len > s.size()) return false;
-    for (std::size_t k = 1; k < len; ++k) {
-      if ((static_cast<unsigned char>(s[i + k]) >> 6) != 0x2) return false;
-    }
-    i += len;
-  }
-  return true;
-}
-
 // A column's value as text for messages, whatever its storage class.
 std::string shown_value(const Statement& q, int column) {
   if (q.is_null(column)) return "NULL";

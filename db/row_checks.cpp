@@ -7,13 +7,63 @@
 
 namespace tenure::db {
 
-std::string shown(std::string_view s) {
-  std::string out = "'";
-  for (std::size_t i = 0; i < s.size() && i < 64; ++i) {
-    const auto c = static_cast<unsigned char>(s[i]);
-    out += c < 0x20 || c == 0x7F ? '?' : static_cast<char>(c);
+namespace {
+
+// The length of the well-formed UTF-8 sequence at the start of `s`, or 0 (RFC 3629, table 3-7
+// of the Unicode standard: the second byte's range depends on the first).
+std::size_t sequence_length(std::string_view s) {
+  const auto byte = [&](std::size_t k) { return static_cast<unsigned char>(s[k]); };
+  const unsigned char c = byte(0);
+  if (c < 0x80) return 1;
+  std::size_t length = 0;
+  unsigned char low = 0x80, high = 0xBF;  // the second byte's range
+  if (c >= 0xC2 && c <= 0xDF) {
+    length = 2;
+  } else if (c >= 0xE0 && c <= 0xEF) {
+    length = 3;
+    if (c == 0xE0) low = 0xA0;   // no overlong forms
+    if (c == 0xED) high = 0x9F;  // no surrogates
+  } else if (c >= 0xF0 && c <= 0xF4) {
+    length = 4;
+    if (c == 0xF0) low = 0x90;
+    if (c == 0xF4) high = 0x8F;  // nothing above U+10FFFF
+  } else {
+    return 0;
   }
-  if (s.size() > 64) out += "...";
+  if (s.size() < length || byte(1) < low || byte(1) > high) return 0;
+  for (std::size_t k = 2; k < length; ++k) {
+    if ((byte(k) & 0xC0) != 0x80) return 0;
+  }
+  return length;
+}
+
+}  // namespace
+
+bool valid_utf8(std::string_view s) {
+  for (std::size_t i = 0; i < s.size();) {
+    const std::size_t length = sequence_length(s.substr(i));
+    if (length == 0) return false;
+    i += length;
+  }
+  return true;
+}
+
+std::string shown(std::string_view s) {
+  constexpr std::size_t kMaxCharacters = 64;
+  std::string out = "'";
+  std::size_t i = 0;
+  for (std::size_t characters = 0; i < s.size() && characters < kMaxCharacters; ++characters) {
+    const std::size_t length = sequence_length(s.substr(i));
+    const auto c = static_cast<unsigned char>(s[i]);
+    if (length == 0 || c < 0x20 || c == 0x7F) {
+      out += '?';
+      ++i;
+    } else {
+      out.append(s.substr(i, length));
+      i += length;
+    }
+  }
+  if (i < s.size()) out += "...";
   return out + "'";
 }
 

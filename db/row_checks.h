@@ -3,6 +3,7 @@
 // fleet_reader.h, and which accepted asset a row names.
 //
 //   shown("PU-0017");                         // "'PU-0017'", control bytes as '?', long text cut
+//   valid_utf8("\xC3\x28");                    // false
 //   magnitude_problem(2e15, "amount");        // "amount 2e+15 is larger in magnitude than 1e+15"
 //   AcceptedAssets assets;  assets.index.insert("PU-0017", 0);
 //   assets.find("PU-9", false, reason);       // npos; reason "asset_id 'PU-9' is not in ..."
@@ -21,7 +22,12 @@ namespace tenure::db {
 
 inline constexpr double kMaxAmount = 1e15;
 
-// Text for a row reference or reason: quoted, shortened, with control bytes shown safely.
+// True when `s` is well-formed UTF-8 (RFC 3629: no overlong forms, no surrogates, nothing above
+// U+10FFFF).
+bool valid_utf8(std::string_view s);
+
+// Text for a row reference or reason: quoted, cut after 64 characters, with control characters
+// and bytes that are not UTF-8 shown as '?', so that the stored text is one line of valid UTF-8.
 std::string shown(std::string_view s);
 
 // An amount beyond kMaxAmount, or nullopt.

@@ -13,6 +13,7 @@
 
 #include "core/errors.h"
 #include "db/review_run.h"
+#include "db/row_checks.h"
 #include "db_test_support.h"
 #include "fixtures/fleets/fixture_fleets.h"
 
@@ -393,7 +394,8 @@ TEST_F(InputCatalogue, LongNonUtf8AndSqlLookingIds) {
                   "'and' || char(10) || 'newline'"),
             1);
   // C3 28 is a broken two-byte form: refused in the asset relation, and its event with it.
-  // ED A0 80 (a lone surrogate) appears only in a cost event: simply an unknown asset.
+  // ED A0 80 (a lone surrogate, not UTF-8 either) appears only in a cost event: simply an
+  // unknown asset.
   EXPECT_EQ(count(fmt::format("SELECT count(*) FROM tenure_rejected WHERE run_id = {} AND "
                               "reason = 'asset_id is not valid UTF-8'", s.run_id)),
             1);
@@ -411,6 +413,14 @@ TEST_F(InputCatalogue, LongNonUtf8AndSqlLookingIds) {
   EXPECT_EQ(count("SELECT count(*) FROM tenure_rejected WHERE instr(row_ref, char(10)) > 0 OR "
                   "instr(reason, char(10)) > 0"),
             0);
+  // ... and bytes that are not UTF-8 as '?', so every stored text is valid UTF-8.
+  {
+    Statement rejected(db, "SELECT row_ref, reason FROM tenure_rejected");
+    while (rejected.step()) {
+      EXPECT_TRUE(valid_utf8(rejected.text(0))) << rejected.text(0);
+      EXPECT_TRUE(valid_utf8(rejected.text(1))) << rejected.text(1);
+    }
+  }
   expect_only_finite_numbers();
 }
 
