@@ -113,7 +113,8 @@ void add_demo_command(CLI::App& app, const Console& console) {
           fmt::format("the fleet's as-of date (default {})", demo::default_as_of().to_iso()))
       ->type_name("DATE");
   command->add_flag("--force", o->force,
-                    "replace existing asset, cost_event and asset_valuation tables");
+                    "replace existing asset, cost_event and asset_valuation tables (earlier "
+                    "tenure_ results stay; remove the file for a fresh start)");
   command->add_flag("--no-bad-rows", o->no_bad_rows,
                     "leave out the handful of bad rows injected on purpose");
   command->footer(

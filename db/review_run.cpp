@@ -2,6 +2,7 @@
 #include "db/review_run.h"
 
 #include <chrono>
+#include <optional>
 
 #include <fmt/chrono.h>
 #include <fmt/format.h>
@@ -20,6 +21,17 @@ namespace {
 std::string now_utc_iso() {
   const std::time_t now = std::chrono::system_clock::to_time_t(std::chrono::system_clock::now());
   return fmt::format("{:%Y-%m-%dT%H:%M:%S}Z", fmt::gmtime(now));
+}
+
+// Runs `step`; a failure of the database (SQLite's own words, "database or disk is full") comes
+// back saying what the review was doing: "cannot store the results: database or disk is full".
+template <class Step>
+void doing(const char* what, Step&& step) {
+  try {
+    step();
+  } catch (const RuntimeFailure& e) {
+    throw RuntimeFailure(fmt::format("{}: {}", what, e.what()));
+  }
 }
 
 }  // namespace
@@ -52,32 +64,37 @@ RunSummary run_review(Connection& db, const ReviewOptions& options) {
   review::FleetData data(as_of, policy.cost_escalation);
   ReadReport report;
   const auto read_start = Clock::now();
-  {
+  doing("cannot read the inputs", [&] {
     // One read transaction: a consistent snapshot of the three relations.
     Transaction snapshot(db, Transaction::Kind::deferred);
     check_sources(db, policy.sources);
     report = read_fleet(db, policy, data, options.split_min_rows);
     snapshot.commit();
-  }
+  });
   RunSummary summary;
   summary.read_seconds = seconds_since(read_start);
   const auto analyse_start = Clock::now();
   review::ReviewResult result = review::plan_review(data, policy);
   {
-    Transaction tx(db, Transaction::Kind::immediate);
-    migrate(db);
-    const RunRecord run{as_of.to_iso(), started_at, policy_text, sha256_hex(policy_text), &policy};
-    ResultsWriter writer(db, run, data, result, report);
+    constexpr const char* kStoring = "cannot store the results";
+    std::optional<Transaction> tx;
+    std::optional<ResultsWriter> writer;
+    doing(kStoring, [&] {
+      tx.emplace(db, Transaction::Kind::immediate);
+      migrate(db);
+      const RunRecord run{as_of.to_iso(), started_at, policy_text, sha256_hex(policy_text), &policy};
+      writer.emplace(db, run, data, result, report);
+    });
     review::analyse_assets(data, policy, result, options.progress,
-                           [&writer](std::span<const review::AssetReview> done) {
-                             writer.add_assets(done);
+                           [&](std::span<const review::AssetReview> done) {
+                             doing(kStoring, [&] { writer->add_assets(done); });
                            });
-    writer.add_rejected(report);
-    summary.run_id = writer.run_id();
+    doing(kStoring, [&] { writer->add_rejected(report); });
+    summary.run_id = writer->run_id();
     if (options.before_commit) options.before_commit();
     summary.analyse_write_seconds = seconds_since(analyse_start);
     const auto commit_start = Clock::now();
-    tx.commit();
+    doing(kStoring, [&] { tx->commit(); });
     summary.commit_seconds = seconds_since(commit_start);
   }
   summary.as_of = as_of.to_iso();

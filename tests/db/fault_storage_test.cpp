@@ -83,7 +83,8 @@ TEST_F(RefusingStorage, FullDiskOnTheFirstRunWritesNothing) {
     Connection db = file.open();
     const double pages = scalar(db, "PRAGMA page_count");
     db.exec(fmt::format("PRAGMA max_page_count = {}", pages + 1));
-    EXPECT_EQ(runtime_failure_of(db, second_run()), "database or disk is full");
+    EXPECT_EQ(runtime_failure_of(db, second_run()),
+              "cannot store the results: database or disk is full");
   }
   EXPECT_EQ(digest(), before);
   Connection db = file.open();
@@ -99,7 +100,8 @@ TEST_F(RefusingStorage, FullDiskAfterAFirstRunLeavesItsResults) {
       Connection db = file.open();
       const double pages = scalar(db, "PRAGMA page_count");
       db.exec(fmt::format("PRAGMA max_page_count = {}", pages + spare_pages));
-      EXPECT_EQ(runtime_failure_of(db, second_run()), "database or disk is full");
+      EXPECT_EQ(runtime_failure_of(db, second_run()),
+                "cannot store the results: database or disk is full");
     }
     EXPECT_EQ(digest(), before);
   }
@@ -117,7 +119,7 @@ TEST_F(RefusingStorage, ReadOnlyDatabaseChangesNothing) {
   {
     Connection db = Connection::open("file:" + file.path() + "?mode=ro");
     const std::string message = runtime_failure_of(db, second_run());
-    EXPECT_EQ(message, "attempt to write a readonly database");
+    EXPECT_EQ(message, "cannot store the results: attempt to write a readonly database");
   }
   EXPECT_EQ(digest(), before);
 }
@@ -126,7 +128,8 @@ TEST_F(RefusingStorage, ReadOnlyDatabaseWithoutResultsTablesChangesNothing) {
   const std::string before = digest();
   {
     Connection db = Connection::open("file:" + file.path() + "?mode=ro");
-    EXPECT_EQ(runtime_failure_of(db, second_run()), "attempt to write a readonly database");
+    EXPECT_EQ(runtime_failure_of(db, second_run()),
+              "cannot store the results: attempt to write a readonly database");
   }
   EXPECT_EQ(digest(), before);
 }
