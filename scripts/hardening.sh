@@ -9,13 +9,16 @@
 # 2. Sanitizers: builds the whole test suite with -fsanitize=address,undefined (g++,
 #    RelWithDebInfo) in build-asan/ and runs ctest there, leaks detected, undefined behaviour
 #    fatal. Tests that cannot run under the sanitizers are excluded by name (see below).
+# 3. Threads: builds the tests whose code runs threads (the cost-event scan and its halves, the
+#    analysis beside the writes, a host's serialized connection) with -fsanitize=thread in
+#    build-tsan/ and runs them; any data race or lock-order report is fatal.
 # Prints the executions of each fuzzer and the time of each step. TENURE_HARDENING_STEPS picks
-# the steps ("fuzz asan" by default).
+# the steps ("fuzz asan tsan" by default).
 set -euo pipefail
 cd "$(dirname "$0")/.."
 
 seconds="${TENURE_FUZZ_SECONDS:-60}"
-steps="${TENURE_HARDENING_STEPS:-fuzz asan}"
+steps="${TENURE_HARDENING_STEPS:-fuzz asan tsan}"
 jobs="${TENURE_JOBS:-2}"
 summary=()
 started=$SECONDS
@@ -73,10 +76,28 @@ asan() {
   summary+=("sanitizer tests (ASan+UBSan, excluded: $excluded): all passed in $(step_time "$t1")")
 }
 
+threaded_tests=(db_cost_event_scan_test db_cost_ranges_test db_review_run_test
+                db_input_catalogue_test plugin_serialized_host_test)
+
+tsan() {
+  local t0=$SECONDS
+  local flags="-fsanitize=thread"
+  cmake -S . -B build-tsan -DCMAKE_BUILD_TYPE=RelWithDebInfo -DTENURE_BUILD_BENCH=OFF \
+    "-DCMAKE_CXX_FLAGS=$flags" "-DCMAKE_C_FLAGS=$flags" >/dev/null
+  cmake --build build-tsan -j"$jobs" --target "${threaded_tests[@]}" tenure_extension
+  summary+=("thread sanitizer build: $(step_time "$t0")")
+  local t1=$SECONDS test
+  for test in "${threaded_tests[@]}"; do
+    TSAN_OPTIONS=halt_on_error=1:second_deadlock_stack=1 "build-tsan/tests/$test"
+  done
+  summary+=("thread sanitizer tests (${threaded_tests[*]}): all passed in $(step_time "$t1")")
+}
+
 for step in $steps; do
   case "$step" in
     fuzz) fuzz ;;
     asan) asan ;;
+    tsan) tsan ;;
     *) echo "hardening: unknown step '$step'" >&2; exit 2 ;;
   esac
 done
