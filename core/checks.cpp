@@ -22,6 +22,13 @@ void require_positive(double value, std::string_view where) {
   if (value <= 0) throw InputError(std::string(where), "must be > 0");
 }
 
+void require_amount(double value, std::string_view where) {
+  require_finite(value, where);
+  if (std::abs(value) > kMaxAmount) {
+    throw InputError(std::string(where), "must be at most 1e15 in magnitude (no equipment costs more)");
+  }
+}
+
 void require_rate(Rate value, std::string_view where) {
   require_finite(value, where);
   if (value <= -1) throw InputError(std::string(where), "must be a rate greater than -1");

@@ -13,6 +13,12 @@ namespace tenure {
 void require_finite(double value, std::string_view where);
 void require_non_negative(double value, std::string_view where);
 void require_positive(double value, std::string_view where);
+
+// The largest amount of money tenure accepts, in magnitude: no equipment costs more, and sums,
+// restatements and EUACs of amounts near the double's limit (1e308) would overflow to infinity.
+inline constexpr double kMaxAmount = 1e15;
+// An amount of money: finite and at most kMaxAmount in magnitude.
+void require_amount(double value, std::string_view where);
 // An interest rate: finite and greater than -1 (so 1 + i > 0).
 void require_rate(Rate value, std::string_view where);
 // A tax rate: 0 <= t < 1.

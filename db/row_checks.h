@@ -1,6 +1,6 @@
 // What the readers of the input relations share (fleet_reader.cpp for assets and valuations,
 // cost_rows.cpp for cost events): how a value is shown in a rejection, the amount bound of
-// fleet_reader.h, and which accepted asset a row names.
+// fleet_reader.h (core/checks.h), and which accepted asset a row names.
 //
 //   shown("PU-0017");                         // "'PU-0017'", control bytes as '?', long text cut
 //   valid_utf8("\xC3\x28");                    // false
@@ -16,11 +16,10 @@
 #include <string_view>
 #include <unordered_set>
 
+#include "core/checks.h"  // kMaxAmount
 #include "fleet/asset_index.h"
 
 namespace tenure::db {
-
-inline constexpr double kMaxAmount = 1e15;
 
 // True when `s` is well-formed UTF-8 (RFC 3629: no overlong forms, no surrogates, nothing above
 // U+10FFFF).

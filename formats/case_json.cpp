@@ -15,11 +15,13 @@ namespace {
 using nlohmann::json;
 using replacement::Ownership;
 
-// Operating costs and market values: non-empty, each finite and >= 0.
+// Operating costs and market values: non-empty, each an amount >= 0.
 std::vector<Money> read_amounts(const JsonObject& asset, std::string_view key) {
   std::vector<Money> amounts = asset.numbers(key);
   for (std::size_t i = 0; i < amounts.size(); ++i) {
-    require_non_negative(amounts[i], index_path(asset.path_of(key), i));
+    const std::string where = index_path(asset.path_of(key), i);
+    require_non_negative(amounts[i], where);
+    require_amount(amounts[i], where);
   }
   return amounts;
 }
@@ -41,6 +43,7 @@ void read_years_ahead(const JsonObject& asset, Ownership& owned) {
 Money first_cost(const JsonObject& asset) {
   const Money cost = asset.number("first_cost");
   require_positive(cost, asset.path_of("first_cost"));
+  require_amount(cost, asset.path_of("first_cost"));
   return cost;
 }
 
@@ -62,6 +65,7 @@ Ownership read_defender(const JsonObject& asset) {
   owned.age_years = asset.whole_number("age_years", 0);
   owned.value_now = asset.number("market_value_now");
   require_non_negative(owned.value_now, asset.path_of("market_value_now"));
+  require_amount(owned.value_now, asset.path_of("market_value_now"));
   read_years_ahead(asset, owned);
   return owned;
 }

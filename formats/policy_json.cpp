@@ -41,6 +41,7 @@ review::ClassPolicy read_class(const JsonObject& c) {
   review::ClassPolicy policy{};
   policy.challenger_first_cost = c.number("challenger_first_cost");
   require_positive(policy.challenger_first_cost, c.path_of("challenger_first_cost"));
+  require_amount(policy.challenger_first_cost, c.path_of("challenger_first_cost"));
   policy.max_life_years = c.whole_number("max_life_years", 1, kMaxLifeYears);
   policy.depreciation = read_depreciation(c.object("depreciation"));
   make_checked_method(policy.depreciation, policy.challenger_first_cost, c.path_of("depreciation"));

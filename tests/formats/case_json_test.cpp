@@ -72,6 +72,19 @@ TEST(ReadCase, EveryBadInputNamesItsPathAndRule) {
        "$.defender.age_years|expected a whole number"},
       {"study period as text", [](json& c) { c["study_period_years"] = "3"; },
        "$.study_period_years|expected a whole number"},
+      // Amounts beyond 1e15 (core/checks.h kMaxAmount): found by the case fuzzer, a market
+      // value of 1e308 made a tax on the sale overflow and a present worth infinite.
+      {"market value of 1e308", [](json& c) { c["challenger"]["market_values"][1] = 1e308; },
+       "$.challenger.market_values[1]|must be at most 1e15 in magnitude (no equipment costs "
+       "more)"},
+      {"operating cost above 1e15", [](json& c) { c["defender"]["operating_costs"][0] = 2e15; },
+       "$.defender.operating_costs[0]|must be at most 1e15 in magnitude (no equipment costs "
+       "more)"},
+      {"first cost above 1e15", [](json& c) { c["challenger"]["first_cost"] = 1.5e15; },
+       "$.challenger.first_cost|must be at most 1e15 in magnitude (no equipment costs more)"},
+      {"market value now above 1e15", [](json& c) { c["defender"]["market_value_now"] = 1e16; },
+       "$.defender.market_value_now|must be at most 1e15 in magnitude (no equipment costs "
+       "more)"},
       // Missing required fields.
       {"no marr", [](json& c) { c.erase("marr"); }, "$.marr|required number is missing"},
       {"no income tax rate", [](json& c) { c.erase("income_tax_rate"); },

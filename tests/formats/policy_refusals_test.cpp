@@ -101,6 +101,9 @@ TEST(PolicyRefusals, WrongTypes) {
        "$.classes.van-delivery|expected an object"},
       {"first cost as text", [](json& p) { van(p)["challenger_first_cost"] = "52000"; },
        "$.classes.van-delivery.challenger_first_cost|expected a number"},
+      {"first cost of 1e308", [](json& p) { van(p)["challenger_first_cost"] = 1e308; },
+       "$.classes.van-delivery.challenger_first_cost|must be at most 1e15 in magnitude (no "
+       "equipment costs more)"},
       {"max life 7.5", [](json& p) { van(p)["max_life_years"] = 7.5; },
        "$.classes.van-delivery.max_life_years|must be a whole number, not 7.5"},
       {"depreciation as text", [](json& p) { van(p)["depreciation"] = "macrs"; },
