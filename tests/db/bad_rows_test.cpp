@@ -79,11 +79,7 @@ class BadRows : public ::testing::Test {
  protected:
   void SetUp() override {
     Connection db = file.open();
-    db.exec(
-        "CREATE TABLE asset(asset_id TEXT, asset_class TEXT, in_service_on TEXT,"
-        " first_cost REAL, retired_on TEXT);"
-        "CREATE TABLE cost_event(asset_id TEXT, occurred_on TEXT, amount REAL, kind TEXT);"
-        "CREATE TABLE asset_valuation(asset_id TEXT, valued_on TEXT, amount REAL, basis TEXT);");
+    fixtures::create_loose_input_tables(db.handle());
     fixtures::add_noiseless_fleet(db.handle());
     db.exec("INSERT INTO asset VALUES ('RET-1', 'pump-fixture', '2015-01-15', 9000, '2023-06-30');"
             "INSERT INTO cost_event VALUES ('RET-1', '2016-03-01', 1000, 'repair');");

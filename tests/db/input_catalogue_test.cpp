@@ -42,13 +42,7 @@ class InputCatalogue : public ::testing::Test {
  protected:
   void SetUp() override {
     Connection db = file.open();
-    // Loose tables (no constraints), as a site's own tables or views may be; the declared
-    // types still give SQLite's usual column affinity.
-    db.exec(
-        "CREATE TABLE asset(asset_id TEXT, asset_class TEXT, in_service_on TEXT,"
-        " first_cost REAL, retired_on TEXT);"
-        "CREATE TABLE cost_event(asset_id TEXT, occurred_on TEXT, amount REAL, kind TEXT);"
-        "CREATE TABLE asset_valuation(asset_id TEXT, valued_on TEXT, amount REAL, basis TEXT);");
+    fixtures::create_loose_input_tables(db.handle());
     fixtures::add_noiseless_fleet(db.handle());
   }
 
