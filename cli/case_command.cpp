@@ -2,11 +2,9 @@
 #include <memory>
 #include <string>
 
+#include "app/case_run.h"
 #include "cli/commands.h"
 #include "cli/input_file.h"
-#include "formats/case_json.h"
-#include "formats/case_table.h"
-#include "replacement/case_analysis.h"
 
 namespace tenure::cli {
 namespace {
@@ -17,12 +15,11 @@ struct CaseOptions {
 };
 
 void run_case(const CaseOptions& options, const Console& console) {
-  const replacement::Case input = formats::read_case(read_input_file(options.file, console.in));
-  const replacement::CaseResult result = replacement::analyse(input);
+  const std::string text = read_input_file(options.file, console.in);
   if (options.format == "table") {
-    console.out << formats::case_result_to_table(result, input.rates);
+    console.out << app::case_result_tables(text);
   } else {
-    console.out << formats::case_result_to_json(result, input.rates).dump(2) << '\n';
+    console.out << app::case_result_json(text).dump(2) << '\n';
   }
 }
 

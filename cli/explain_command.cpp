@@ -8,12 +8,11 @@
 
 #include <fmt/format.h>
 
+#include "app/explain_run.h"
 #include "cli/commands.h"
 #include "core/errors.h"
-#include "db/run_reader.h"
 #include "explain/explain_json.h"
 #include "explain/explain_text.h"
-#include "formats/policy_json.h"
 
 namespace tenure::cli {
 namespace {
@@ -25,29 +24,9 @@ struct ExplainOptions {
   std::string format = "text";
 };
 
-explain::Explanation read_explanation(const ExplainOptions& o) {
-  db::Connection db = db::Connection::open_existing(o.db, "--db");
-  db::Transaction snapshot(db, db::Transaction::Kind::deferred);
-  explain::StoredRun run = db::read_run(db, o.run);
-  auto asset = db::read_asset_result(db, run.run_id, o.asset);
-  if (!asset) {
-    throw InputError("ASSET", fmt::format("no asset '{}' in run {}", o.asset, run.run_id));
-  }
-  auto stored_class = db::read_class_result(db, run.run_id, asset->asset_class);
-  if (!stored_class) {
-    throw RuntimeFailure(fmt::format("run {} has no row for class '{}'", run.run_id,
-                                     asset->asset_class));
-  }
-  // Only the sources are needed here; explain_asset reads the whole policy again.
-  const review::Sources sources = formats::read_policy(run.policy_json).sources;
-  auto input = db::read_input_asset(db, sources, o.asset);
-  snapshot.commit();
-  return explain::explain_asset(std::move(run), std::move(*stored_class), std::move(*asset),
-                                std::move(input));
-}
-
 void run_explain(const ExplainOptions& o, const Console& console) {
-  const explain::Explanation e = read_explanation(o);
+  db::Connection db = db::Connection::open_existing(o.db, "--db");
+  const explain::Explanation e = app::explain_stored_asset(db, o.asset, o.run);
   if (o.format == "json") {
     console.out << explain::explanation_to_json(e).dump(2) << '\n';
   } else {

@@ -9,9 +9,9 @@
 
 #include <fmt/format.h>
 
+#include "app/report_run.h"
 #include "cli/commands.h"
 #include "core/errors.h"
-#include "db/run_reader.h"
 #include "formats/text_table.h"
 #include "report/report_page.h"
 
@@ -24,23 +24,9 @@ struct ReportOptions {
   std::optional<std::int64_t> run;
 };
 
-report::ReportData read_report_data(const ReportOptions& o) {
-  db::Connection db = db::Connection::open_existing(o.db, "--db");
-  db::Transaction snapshot(db, db::Transaction::Kind::deferred);
-  report::ReportData data;
-  data.run = db::read_run(db, o.run);
-  const std::int64_t id = data.run.run_id;
-  data.classes = db::read_class_results(db, id);
-  data.assets = db::read_asset_results(db, id);
-  data.challenger_curves = db::read_challenger_curves(db, id);
-  data.rejected = db::read_rejected(db, id, report::kMaxRejectedRows);
-  data.due_before = db::due_in_previous_run(db, id);
-  snapshot.commit();
-  return data;
-}
-
 void run_report(const ReportOptions& o, const Console& console) {
-  const report::ReportData data = read_report_data(o);
+  db::Connection db = db::Connection::open_existing(o.db, "--db");
+  const report::ReportData data = app::read_report_data(db, o.run);
   const std::string html = report::render_report(data);
   // Written next to the target and renamed over it, so a reader never sees half a page.
   const std::string partial = o.out + ".partial";
@@ -55,7 +41,7 @@ void run_report(const ReportOptions& o, const Console& console) {
     throw InputError("--out", "cannot write the file '" + o.out + "'");
   }
   std::size_t due = 0;
-  for (const explain::StoredAsset& a : data.assets) due += a.due() ? 1 : 0;
+  for (const results::AssetRow& a : data.assets) due += a.due() ? 1 : 0;
   formats::TextTable t({"", ""}, 2);
   t.add_row({"run", fmt::format("{} as of {}", data.run.run_id, data.run.as_of)});
   t.add_row({"assets", std::to_string(data.assets.size())});

@@ -14,7 +14,7 @@
 #include "cli/commands.h"
 #include "cli/input_file.h"
 #include "core/errors.h"
-#include "db/review_run.h"
+#include "app/review_run.h"
 #include "formats/caution.h"
 #include "formats/text_table.h"
 
@@ -35,13 +35,14 @@ Date parse_as_of(const std::string& text) {
   return *date;
 }
 
-std::string summary_table(const db::RunSummary& s) {
+std::string summary_table(const app::RunSummary& s) {
   formats::TextTable t({"", ""}, 2);
   t.add_row({"run", std::to_string(s.run_id)});
   t.add_row({"as of", s.as_of});
-  t.add_row({"basis", s.basis == "after_tax" ? "after tax" : "before tax"});
-  t.add_row({"money", s.money == "real" ? "real (costs restated; marr is a real rate)"
-                                        : "nominal (costs as recorded)"});
+  t.add_row({"basis", s.basis == replacement::Basis::after_tax ? "after tax" : "before tax"});
+  t.add_row({"money", s.money == results::MoneyTerms::real
+                          ? "real (costs restated; marr is a real rate)"
+                          : "nominal (costs as recorded)"});
   t.add_row({"rows read", std::to_string(s.rows_read)});
   t.add_row({"rows rejected", std::to_string(s.rows_rejected)});
   t.add_row({"rows dated after as-of", std::to_string(s.rows_after_as_of)});
@@ -56,9 +57,10 @@ std::string summary_table(const db::RunSummary& s) {
   return t.render();
 }
 
-nlohmann::json summary_json(const db::RunSummary& s) {
+nlohmann::json summary_json(const app::RunSummary& s) {
   return {{"run_id", s.run_id},           {"as_of", s.as_of},
-          {"basis", s.basis},             {"money", s.money},
+          {"basis", replacement::to_string(s.basis)},
+          {"money", results::to_string(s.money)},
           {"rows_read", s.rows_read},     {"rows_rejected", s.rows_rejected},
           {"rows_after_as_of", s.rows_after_as_of},
           {"assets_reviewed", s.assets_reviewed},
@@ -71,7 +73,7 @@ nlohmann::json summary_json(const db::RunSummary& s) {
 }
 
 void run(const ReviewCommandOptions& o, const Console& console) {
-  db::ReviewOptions options;
+  app::ReviewOptions options;
   if (!o.policy_file.empty()) options.policy_json = read_input_file(o.policy_file, console.in);
   if (!o.as_of.empty()) options.as_of = parse_as_of(o.as_of);
   const bool show_progress = !o.quiet && ::isatty(STDERR_FILENO);
@@ -82,7 +84,7 @@ void run(const ReviewCommandOptions& o, const Console& console) {
     };
   }
   db::Connection db = db::Connection::open_existing(o.db, "--db");
-  const db::RunSummary summary = db::run_review(db, options);
+  const app::RunSummary summary = app::run_review(db, options);
   if (o.format == "json") {
     console.out << summary_json(summary).dump(2) << '\n';
     return;

@@ -33,16 +33,14 @@
 #include "db/connection.h"
 #include "db/cost_ranges.h"
 #include "db/row_checks.h"
+#include "results/rows.h"
 #include "review/fleet_data.h"
 #include "review/policy.h"
 
 namespace tenure::db {
 
-struct Rejection {
-  std::string source;   // the relation as named by the policy's sources
-  std::string row_ref;  // "row 17 (asset_id 'PU-0017')"
-  std::string reason;
-};
+// A rejected input row, as tenure_rejected stores it.
+using Rejection = results::RejectedRow;
 
 struct ReadReport {
   std::int64_t rows_read = 0;

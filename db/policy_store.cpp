@@ -11,9 +11,11 @@ constexpr std::string_view kCreate =
     " policy_json TEXT NOT NULL)";
 }  // namespace
 
+void create_policy_table(Connection& db) { db.exec(kCreate); }
+
 std::int64_t store_policy(Connection& db, std::string_view policy_json) {
   Transaction tx(db, Transaction::Kind::immediate);
-  db.exec(kCreate);
+  create_policy_table(db);
   Statement insert(db, "INSERT INTO tenure_policy(policy_json) VALUES (?1)");
   insert.bind(1, policy_json);
   insert.run();

@@ -14,6 +14,9 @@
 
 namespace tenure::db {
 
+// Creates tenure_policy when it is missing, in the caller's transaction.
+void create_policy_table(Connection& db);
+
 // Stores the JSON text as given (comments kept), in its own transaction; returns its policy_id.
 // The caller checks the text first (formats/policy_json.h).
 std::int64_t store_policy(Connection& db, std::string_view policy_json);

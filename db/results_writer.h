@@ -1,13 +1,14 @@
 // Writes one review's results (SPEC 7) in the caller's write transaction: the run row, per-class
 // and per-asset results, EUAC curves and cash-flow tables (per the policy's detail), and the
-// rejected rows. Every value is bound; statements are prepared once and reused. Assets are
-// added in runs as the analysis finishes them (review::analyse_assets), in asset_id order.
+// rejected rows, each as the row results/from_review.h makes of it, through its table's
+// generated INSERT (db/table_sql.h). Assets are added in runs as the analysis finishes them
+// (review::analyse_assets), in asset_id order.
 //
 //   Transaction tx(db, Transaction::Kind::immediate);
 //   migrate(db);
-//   ResultsWriter writer(db, run, data, planned, report);   // the run row and the classes
+//   ResultsWriter writer(db, run_row, data, planned);   // the run row and the classes
 //   review::analyse_assets(data, policy, planned, {}, [&](auto done) { writer.add_assets(done); });
-//   writer.add_rejected(report);
+//   writer.add_rejected(report.rejected);
 //   tx.commit();
 #pragma once
 
@@ -17,40 +18,33 @@
 #include <string>
 
 #include "db/connection.h"
-#include "db/fleet_reader.h"
+#include "db/table_sql.h"
+#include "results/rows.h"
 #include "review/fleet_review.h"
 
 namespace tenure::db {
 
-struct RunRecord {
-  std::string as_of;        // YYYY-MM-DD
-  std::string started_at;   // ISO 8601 UTC
-  std::string policy_json;  // as given
-  std::string policy_sha256;
-  const review::Policy* policy;
-};
-
 class ResultsWriter {
  public:
-  // Inserts the run row and the class results (with the challengers' detail) of `planned`, a
-  // review::plan_review result; `data` and `run.policy` must outlive the writer.
-  ResultsWriter(Connection& db, const RunRecord& run, const review::FleetData& data,
-                const review::ReviewResult& planned, const ReadReport& report);
+  // Inserts `run` (the database gives its run_id) and the class results, with the challengers'
+  // detail, of `planned`, a review::plan_review result; `data` must outlive the writer.
+  ResultsWriter(Connection& db, const results::RunRow& run, const review::FleetData& data,
+                const review::ReviewResult& planned);
   std::int64_t run_id() const { return run_id_; }
   // Inserts analysed assets, with their detail where it was kept.
   void add_assets(std::span<const review::AssetReview> assets);
-  void add_rejected(const ReadReport& report);
+  void add_rejected(std::span<const results::RejectedRow> rows);
 
  private:
   void add_detail(const std::string& asset_class, const std::optional<std::string>& asset_id,
-                  const char* role, const replacement::AssetAnalysis& analysis);
+                  results::Role role, const replacement::AssetAnalysis& analysis);
 
   Connection& db_;
   const review::FleetData& data_;
   std::int64_t run_id_;
-  Statement asset_;
-  Statement curve_;
-  Statement flow_;
+  TableWriter<results::AssetRow> assets_;
+  TableWriter<results::CurveRow> curves_;
+  TableWriter<results::CashFlowRow> flows_;
 };
 
 }  // namespace tenure::db

@@ -1,9 +1,10 @@
 // Reads a stored review run back (SPEC 7) for `tenure explain` and `tenure report`: the run row,
 // its class and asset results, the class challengers' EUAC curves, its rejected rows, which
-// assets were due in the run before, and one asset's input row and cost events. Every value is
-// bound; the results tables and the input relations are only read.
+// assets were due in the run before, and one asset's input row and cost events. Rows come back
+// as results/rows.h holds them, through each table's generated SELECT (db/table_sql.h). Every
+// value is bound; the results tables and the input relations are only read.
 //
-//   explain::StoredRun run = read_run(db, std::nullopt);   // the latest successful run
+//   results::RunRow run = read_run(db, std::nullopt);   // the latest successful run
 //   auto asset = read_asset_result(db, run.run_id, "PU-0042");
 //   auto input = read_input_asset(db, policy.sources, "PU-0042");
 //
@@ -20,7 +21,8 @@
 #include <vector>
 
 #include "db/connection.h"
-#include "explain/stored_run.h"
+#include "results/input_asset.h"
+#include "results/rows.h"
 #include "review/policy.h"
 
 namespace tenure::db {
@@ -28,36 +30,40 @@ namespace tenure::db {
 // The run `run_id`, or the latest successful one. Throws InputError naming "--db" when the
 // database holds no successful run (or no results schema), and "--run" when run_id is not a
 // successful run.
-explain::StoredRun read_run(Connection& db, std::optional<std::int64_t> run_id);
+results::RunRow read_run(Connection& db, std::optional<std::int64_t> run_id);
 
 // One asset's result row in the run; nullopt when the run did not review that asset id.
-std::optional<explain::StoredAsset> read_asset_result(Connection& db, std::int64_t run_id,
-                                                      std::string_view asset_id);
+std::optional<results::AssetRow> read_asset_result(Connection& db, std::int64_t run_id,
+                                                   std::string_view asset_id);
 // Every asset result of the run, ordered by asset_id.
-std::vector<explain::StoredAsset> read_asset_results(Connection& db, std::int64_t run_id);
+std::vector<results::AssetRow> read_asset_results(Connection& db, std::int64_t run_id);
 
 // One class row; nullopt when the run has no such class.
-std::optional<explain::StoredClass> read_class_result(Connection& db, std::int64_t run_id,
-                                                      std::string_view asset_class);
+std::optional<results::ClassRow> read_class_result(Connection& db, std::int64_t run_id,
+                                                   std::string_view asset_class);
 // Every class row of the run, ordered by class.
-std::vector<explain::StoredClass> read_class_results(Connection& db, std::int64_t run_id);
+std::vector<results::ClassRow> read_class_results(Connection& db, std::int64_t run_id);
 
 // The class challengers' EUAC curves, ordered by class, basis and years.
-std::vector<explain::CurvePoint> read_challenger_curves(Connection& db, std::int64_t run_id);
+std::vector<results::CurveRow> read_challenger_curves(Connection& db, std::int64_t run_id);
 
 // The run's first `limit` rejected rows, in the order they were recorded.
-std::vector<explain::RejectedRow> read_rejected(Connection& db, std::int64_t run_id,
+std::vector<results::RejectedRow> read_rejected(Connection& db, std::int64_t run_id,
                                                 std::size_t limit);
 
 // The ids of the assets due (review or replace) in the latest successful run before `run_id`;
 // empty when there is none, so every asset due now is newly due (as the view tenure_newly_due).
 std::unordered_set<std::string> due_in_previous_run(Connection& db, std::int64_t run_id);
 
+// How many assets of the run the view tenure_newly_due lists.
+std::int64_t count_newly_due(Connection& db, std::int64_t run_id);
+
 // The asset's row in the relation sources.assets and its events in sources.costs (SELECT ...
 // WHERE asset_id = ?1: the index on (asset_id, occurred_on) makes it a few page reads). Nullopt
 // when the relation has no such asset. Throws InputError naming "$.sources.assets" or
 // "$.sources.costs" when a relation name is not a plain SQL identifier.
-std::optional<explain::InputAsset> read_input_asset(Connection& db, const review::Sources& sources,
+std::optional<results::InputAsset> read_input_asset(Connection& db,
+                                                    const review::Sources& sources,
                                                     std::string_view asset_id);
 
 }  // namespace tenure::db

@@ -1,119 +1,71 @@
-// The results schema and its migrations (see schema.h).
+// The results schema and its migrations (see schema.h). The tables are generated from their
+// column lists (results/tables.h, db/table_sql.h); the views are written here.
 #include "db/schema.h"
 
+#include <algorithm>
 #include <array>
+#include <string>
 #include <string_view>
+
+#include <fmt/format.h>
+
+#include "db/policy_store.h"
+#include "db/table_sql.h"
 
 namespace tenure::db {
 namespace {
 
-// Migration 1: the run history, results, rejected rows and the four views of SPEC 7.
-constexpr std::string_view kMigration1 = R"sql(
-CREATE TABLE IF NOT EXISTS tenure_policy(
-  policy_id INTEGER PRIMARY KEY,
-  stored_at TEXT NOT NULL DEFAULT (strftime('%Y-%m-%dT%H:%M:%SZ','now')),
-  policy_json TEXT NOT NULL);
+// SPEC 7's columns of the latest views, in its order; the columns a table marks `in_views` follow
+// them in table order.
+constexpr std::array<std::string_view, 12> kLatestColumns = {
+    "run_id",          "asset_id",        "asset_class",
+    "age_years",       "class_esl_years", "defender_euac",
+    "challenger_euac", "marginal_cost_next_year", "replace_after_years",
+    "verdict",         "reason",          "basis"};
+constexpr std::array<std::string_view, 15> kClassLatestColumns = {
+    "run_id",          "asset_class",     "esl_years_before_tax", "euac_before_tax",
+    "esl_years_after_tax", "euac_after_tax", "cost_model",       "cost_a",
+    "cost_g",          "cost_r2",         "asset_years",          "value_model",
+    "value_start",     "value_decline",   "valuations_used"};
 
-CREATE TABLE tenure_run(
-  run_id INTEGER PRIMARY KEY,
-  as_of TEXT NOT NULL,
-  started_at TEXT NOT NULL,
-  finished_at TEXT,
-  policy_json TEXT NOT NULL,
-  policy_sha256 TEXT NOT NULL,
-  rows_read INTEGER NOT NULL,
-  rows_rejected INTEGER NOT NULL,
-  status TEXT NOT NULL CHECK (status IN ('ok', 'failed')),
-  basis TEXT NOT NULL,                 -- 'after_tax' or 'before_tax'
-  money TEXT NOT NULL,                 -- 'real' (costs restated by cost_escalation) or 'nominal'
-  assets_reviewed INTEGER NOT NULL,
-  assets_retired INTEGER NOT NULL,
-  assets_not_yet_in_service INTEGER NOT NULL,
-  rows_after_as_of INTEGER NOT NULL,   -- events and valuations dated after as_of: not counted
-  tenure_version TEXT NOT NULL);
+constexpr std::string_view kLatestRun =
+    "run_id = (SELECT max(run_id) FROM tenure_run WHERE status = 'ok')";
 
-CREATE TABLE tenure_class_result(
-  run_id INTEGER NOT NULL REFERENCES tenure_run(run_id),
-  asset_class TEXT NOT NULL,
-  assets INTEGER NOT NULL,
-  challenger_first_cost REAL NOT NULL,
-  max_life_years INTEGER NOT NULL,
-  esl_years_before_tax INTEGER, euac_before_tax REAL,
-  esl_years_after_tax INTEGER, euac_after_tax REAL,
-  cost_model TEXT, cost_a REAL, cost_g REAL, cost_r2 REAL,
-  asset_years INTEGER NOT NULL,
-  value_model TEXT NOT NULL, value_start REAL NOT NULL, value_decline REAL NOT NULL,
-  valuations_used INTEGER NOT NULL,
-  note TEXT,
-  PRIMARY KEY (run_id, asset_class));
+// "a, b, c": the contract's columns first, then the table's other columns shown in views, in
+// lines of at most 100 columns after "  SELECT ".
+template <class Row, std::size_t N>
+std::string view_columns(const std::array<std::string_view, N>& contract,
+                         const results::Table<Row>& table) {
+  std::vector<std::string_view> names(contract.begin(), contract.end());
+  for (const results::Column<Row>& c : table.columns) {
+    if (c.options.in_views && std::find(names.begin(), names.end(), c.name) == names.end()) {
+      names.push_back(c.name);
+    }
+  }
+  std::string out;
+  std::size_t column = 9;  // after "  SELECT "
+  for (std::size_t i = 0; i < names.size(); ++i) {
+    const std::size_t width = names[i].size() + (i + 1 < names.size() ? 1 : 0);
+    if (i > 0 && column + 1 + width > 100) {
+      out += "\n         ";
+      column = 9;
+    } else if (i > 0) {
+      out += ' ';
+      ++column;
+    }
+    out += names[i];
+    if (i + 1 < names.size()) out += ',';
+    column += width;
+  }
+  return out;
+}
 
-CREATE TABLE tenure_asset_result(
-  run_id INTEGER NOT NULL REFERENCES tenure_run(run_id),
-  asset_id TEXT NOT NULL,
-  asset_class TEXT NOT NULL,
-  age_years INTEGER NOT NULL,
-  first_cost REAL NOT NULL,
-  book_value_now REAL NOT NULL,
-  market_value_now REAL NOT NULL,
-  market_value_source TEXT NOT NULL,
-  cost_years INTEGER NOT NULL,         -- complete age-years of its own cost history
-  cost_ratio REAL NOT NULL,            -- its observed / class-predicted cost
-  credibility_factor REAL NOT NULL,    -- 1 + z (ratio - 1), z = m / (m + 3)
-  class_esl_years INTEGER,
-  defender_best_years INTEGER,
-  defender_euac REAL,
-  challenger_euac REAL,
-  defender_euac_before_tax REAL,
-  defender_euac_after_tax REAL,
-  marginal_cost_next_year REAL,
-  replace_after_years INTEGER,
-  verdict TEXT NOT NULL CHECK (verdict IN ('keep', 'review', 'replace')),
-  reason TEXT NOT NULL,
-  basis TEXT NOT NULL,
-  PRIMARY KEY (run_id, asset_id));
-
-CREATE TABLE tenure_euac_curve(
-  run_id INTEGER NOT NULL REFERENCES tenure_run(run_id),
-  asset_class TEXT NOT NULL,
-  asset_id TEXT,                       -- NULL for the class challenger
-  role TEXT NOT NULL CHECK (role IN ('challenger', 'defender')),
-  basis TEXT NOT NULL,
-  years INTEGER NOT NULL,
-  euac REAL NOT NULL,
-  marginal_cost REAL NOT NULL);
-CREATE INDEX tenure_euac_curve_by_asset ON tenure_euac_curve(run_id, asset_class, asset_id);
-
-CREATE TABLE tenure_cash_flow(
-  run_id INTEGER NOT NULL REFERENCES tenure_run(run_id),
-  asset_class TEXT NOT NULL,
-  asset_id TEXT,                       -- NULL for the class challenger
-  role TEXT NOT NULL CHECK (role IN ('challenger', 'defender')),
-  year INTEGER NOT NULL,               -- years kept
-  operating_cost REAL NOT NULL,
-  depreciation REAL NOT NULL,
-  book_value REAL NOT NULL,
-  taxable_income REAL NOT NULL,
-  income_tax REAL NOT NULL,
-  after_tax_cash_flow REAL NOT NULL,
-  market_value REAL NOT NULL,          -- if sold at the end of this year
-  disposal_tax REAL NOT NULL,
-  net_proceeds REAL NOT NULL);
-CREATE INDEX tenure_cash_flow_by_asset ON tenure_cash_flow(run_id, asset_class, asset_id);
-
-CREATE TABLE tenure_rejected(
-  run_id INTEGER NOT NULL REFERENCES tenure_run(run_id),
-  source TEXT NOT NULL,                -- the input relation, as named by the policy's sources
-  row_ref TEXT NOT NULL,
-  reason TEXT NOT NULL);
-CREATE INDEX tenure_rejected_by_run ON tenure_rejected(run_id);
-
+std::string views_sql() {
+  return fmt::format(R"sql(
 CREATE VIEW tenure_latest AS
-  SELECT run_id, asset_id, asset_class, age_years, class_esl_years, defender_euac,
-         challenger_euac, marginal_cost_next_year, replace_after_years, verdict, reason, basis,
-         first_cost, book_value_now, market_value_now, market_value_source, credibility_factor,
-         defender_best_years
+  SELECT {0}
   FROM tenure_asset_result
-  WHERE run_id = (SELECT max(run_id) FROM tenure_run WHERE status = 'ok');
+  WHERE {2};
 
 CREATE VIEW tenure_due AS
   SELECT * FROM tenure_latest WHERE verdict IN ('replace', 'review');
@@ -128,19 +80,32 @@ CREATE VIEW tenure_newly_due AS
       AND p.verdict IN ('replace', 'review'));
 
 CREATE VIEW tenure_class_latest AS
-  SELECT run_id, asset_class, esl_years_before_tax, euac_before_tax, esl_years_after_tax,
-         euac_after_tax, cost_model, cost_a, cost_g, cost_r2, asset_years, value_model,
-         value_start, value_decline, valuations_used, assets, challenger_first_cost,
-         max_life_years, note
+  SELECT {1}
   FROM tenure_class_result
-  WHERE run_id = (SELECT max(run_id) FROM tenure_run WHERE status = 'ok');
-)sql";
+  WHERE {2};
+)sql",
+                     view_columns(kLatestColumns, results::asset_table()),
+                     view_columns(kClassLatestColumns, results::class_table()), kLatestRun);
+}
 
-constexpr std::array<std::string_view, 1> kMigrations = {kMigration1};
+constexpr std::string_view kDropViews =
+    "DROP VIEW IF EXISTS tenure_newly_due; DROP VIEW IF EXISTS tenure_due; "
+    "DROP VIEW IF EXISTS tenure_latest; DROP VIEW IF EXISTS tenure_class_latest;";
+
+// Calls f(table) for each stored table, in the order they are created.
+template <class F>
+void for_each_table(F&& f) {
+  f(results::run_table());
+  f(results::class_table());
+  f(results::asset_table());
+  f(results::curve_table());
+  f(results::cash_flow_table());
+  f(results::rejected_table());
+}
 
 }  // namespace
 
-int current_schema_version() { return static_cast<int>(kMigrations.size()); }
+int current_schema_version() { return results::newest_column_version(); }
 
 void migrate(Connection& db) {
   db.exec(
@@ -149,12 +114,26 @@ void migrate(Connection& db) {
       " applied_at TEXT NOT NULL DEFAULT (strftime('%Y-%m-%dT%H:%M:%SZ','now')))");
   Statement current(db, "SELECT coalesce(max(version), 0) FROM tenure_schema_version");
   current.step();
-  const auto applied = static_cast<std::size_t>(current.integer(0));
+  const auto applied = static_cast<int>(current.integer(0));
   current.reset();
+  const int target = current_schema_version();
+  if (applied >= target) return;
+  create_policy_table(db);
+  if (applied == 0) {
+    for_each_table([&](const auto& table) { db.exec(create_table_sql(table)); });
+  } else {
+    // Version v adds the columns whose `since` is v (results/tables.h).
+    for_each_table([&](const auto& table) {
+      for (const auto& column : table.columns) {
+        if (column.options.since > applied) db.exec(add_column_sql(table, column));
+      }
+    });
+  }
+  db.exec(kDropViews);
+  db.exec(views_sql());
   Statement record(db, "INSERT INTO tenure_schema_version(version) VALUES (?1)");
-  for (std::size_t v = applied; v < kMigrations.size(); ++v) {
-    db.exec(kMigrations[v]);
-    record.bind(1, static_cast<std::int64_t>(v + 1));
+  for (int v = applied + 1; v <= target; ++v) {
+    record.bind(1, std::int64_t{v});
     record.run();
   }
 }

@@ -65,7 +65,7 @@ json analysis(const replacement::AssetAnalysis& a, const char* best_key, Rate ra
 }
 
 json inputs(const Explanation& e) {
-  const StoredAsset& a = e.stored;
+  const results::AssetRow& a = e.stored;
   json out = {{"asset_id", a.asset_id},
               {"asset_class", a.asset_class},
               {"in_service_on", e.input ? json(e.input->in_service_on) : json(nullptr)},
@@ -95,7 +95,7 @@ json rates(const Explanation& e) {
 }
 
 json class_json(const Explanation& e) {
-  const StoredClass& c = e.stored_class;
+  const results::ClassRow& c = e.stored_class;
   const review::ClassPolicy& p = *e.model.policy;
   json cost = nullptr;
   if (const auto& k = e.model.cost_curve) {
@@ -123,7 +123,7 @@ json class_json(const Explanation& e) {
 }
 
 json cost_history(const Explanation& e) {
-  const StoredAsset& a = e.stored;
+  const results::AssetRow& a = e.stored;
   json out = {{"stored", {{"years", a.cost_years},
                           {"ratio", a.cost_ratio},
                           {"factor", a.credibility_factor}}}};
@@ -176,8 +176,8 @@ json timing(const Explanation& e) {
 json verdict(const Explanation& e) {
   const review::AssetReview& r = e.review;
   const replacement::Decision* d = r.decision ? &*r.decision : nullptr;
-  return {{"verdict", review::to_string(r.verdict)},
-          {"reason", r.reason},
+  return {{"verdict", review::to_string(r.finding.verdict)},
+          {"reason", r.finding.reason},
           {"basis", replacement::to_string(r.basis)},
           {"replace_after_years", d ? json(d->timing.keep_years) : json(nullptr)},
           {"defender_euac", d ? json(d->defender_euac) : json(nullptr)},
@@ -219,8 +219,8 @@ json explanation_to_json(const Explanation& e) {
               {"run",
                {{"run_id", e.run.run_id},
                 {"as_of", e.run.as_of},
-                {"basis", e.run.basis},
-                {"money", e.run.money},
+                {"basis", replacement::to_string(e.run.basis)},
+                {"money", results::to_string(e.run.money)},
                 {"tenure_version", e.run.tenure_version},
                 {"policy_sha256", e.run.policy_sha256}}},
               {"check", {{"reproduced", e.reproduced()}, {"differences", e.differences}}},

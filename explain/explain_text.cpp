@@ -11,6 +11,7 @@
 #include "formats/caution.h"
 #include "formats/depreciation_json.h"
 #include "formats/text_table.h"
+#include "review/verdict_reasons.h"
 
 namespace tenure::explain {
 namespace text {
@@ -47,7 +48,7 @@ const review::ClassPolicy& class_policy(const Explanation& e) { return *e.model.
 
 // Where the market value now came from, in words with the numbers behind it.
 std::string market_value_words(const Explanation& e) {
-  const StoredAsset& a = e.stored;
+  const results::AssetRow& a = e.stored;
   if (a.market_value_source != "class value curve") {
     return "its latest valuation within 12 months of the as-of date (" + a.market_value_source + ")";
   }
@@ -63,7 +64,7 @@ bool close(double a, double b) {
 }  // namespace
 
 std::string inputs(const Explanation& e) {
-  const StoredAsset& a = e.stored;
+  const results::AssetRow& a = e.stored;
   const review::ClassPolicy& p = class_policy(e);
   const std::string assets = e.policy->sources.assets;
   TextTable t({"input", "value", "where it comes from"}, 3);
@@ -112,7 +113,7 @@ std::string rates_and_money(const Explanation& e) {
 }
 
 std::string class_curves(const Explanation& e) {
-  const StoredClass& c = e.stored_class;
+  const results::ClassRow& c = e.stored_class;
   const review::ClassPolicy& p = class_policy(e);
   TextTable t({"curve", "value"}, 2);
   if (const auto& curve = e.model.cost_curve) {
@@ -157,7 +158,7 @@ std::string class_curves(const Explanation& e) {
 }
 
 std::string own_costs(const Explanation& e) {
-  const StoredAsset& a = e.stored;
+  const results::AssetRow& a = e.stored;
   const std::string title = fmt::format(
       "4. Own cost history against the class curve ({} money, escalation {} a year)",
       e.run.as_of, percent(e.policy->cost_escalation));
@@ -213,28 +214,23 @@ std::string own_costs(const Explanation& e) {
 }
 
 std::string verdict_rule(const Explanation& e) {
-  const review::AssetReview& r = e.review;
-  std::string body =
-      "  replace when k* = 0; otherwise review when the age is at or past the class's economic "
-      "life,\n  or when |D - C| <= review margin x C; otherwise keep (D, C: least EUACs on the "
-      "basis)\n";
-  if (r.decision) {
-    const replacement::Decision& d = *r.decision;
-    const double gap = std::abs(d.defender_euac - d.challenger_euac);
-    const double allowed = e.policy->review_margin * d.challenger_euac;
+  const review::VerdictFinding& f = e.review.finding;
+  std::string body = review::nightly_rule_in_words();
+  if (f.figures && f.age) {
+    const review::VerdictFigures& d = *f.figures;
+    const auto holds = [](bool test) { return test ? "yes" : "no"; };
     TextTable t({"test", "figures", "holds"}, 2);
-    t.add_row({"k* = 0", fmt::format("k* = {}", d.timing.keep_years),
-               d.timing.keep_years == 0 ? "yes" : "no"});
+    t.add_row({"k* = 0", fmt::format("k* = {}", d.keep_years), holds(d.keep_years == 0)});
     t.add_row({"age >= economic life",
-               fmt::format("{} against {}", years(e.stored.age_years), years(d.challenger_esl)),
-               e.stored.age_years >= d.challenger_esl ? "yes" : "no"});
+               fmt::format("{} against {}", years(*f.age), years(d.challenger_esl)),
+               holds(f.past_economic_life)});
     t.add_row({"|D - C| <= margin x C",
                fmt::format("|{} - {}| = {} against {}", money(d.defender_euac),
-                           money(d.challenger_euac), money(gap), money(allowed)),
-               gap <= allowed ? "yes" : "no"});
+                           money(d.challenger_euac), money(f.gap), money(f.allowed)),
+               holds(f.close_to_challenger)});
     body += t.render();
   }
-  body += fmt::format("  verdict: {}\n  {}\n", review::to_string(r.verdict), r.reason);
+  body += fmt::format("  verdict: {}\n  {}\n", review::to_string(f.verdict), f.reason);
   return section("11. Verdict", body);
 }
 
@@ -245,7 +241,7 @@ namespace {
 std::string headline(const Explanation& e) {
   const review::AssetReview& r = e.review;
   std::string verdict;
-  switch (r.verdict) {
+  switch (r.finding.verdict) {
     case review::Verdict::replace: verdict = "REPLACE now"; break;
     case review::Verdict::review: verdict = "REVIEW"; break;
     case review::Verdict::keep: verdict = "KEEP"; break;
@@ -257,7 +253,7 @@ std::string headline(const Explanation& e) {
   std::string out = fmt::format(
       "tenure explain: asset {} (class {}), run {} as of {}\n\nVerdict: {}, {} basis\n  {}\n",
       e.stored.asset_id, e.stored.asset_class, e.run.run_id, e.run.as_of, verdict,
-      text::basis_words(r.basis), r.reason);
+      text::basis_words(r.basis), r.finding.reason);
   if (e.reproduced()) {
     out += "Check: the stored figures (EUACs, next year's marginal cost, k*, verdict, reason) are "
            "reproduced exactly\nby recomputing from the stored inputs.\n";

@@ -12,15 +12,18 @@ Rate Explanation::basis_rate() const {
                                                        : policy->rates.marr;
 }
 
-Explanation explain_asset(StoredRun run, StoredClass stored_class, StoredAsset stored,
-                          std::optional<InputAsset> input) {
-  std::shared_ptr<const review::Policy> policy;
+std::shared_ptr<const review::Policy> run_policy(const results::RunRow& run) {
   try {
-    policy = std::make_shared<const review::Policy>(formats::read_policy(run.policy_json));
+    return std::make_shared<const review::Policy>(formats::read_policy(run.policy_json));
   } catch (const InputError& error) {
     throw InputError("policy_json", "the policy stored with run " + std::to_string(run.run_id) +
                                         " does not read: " + error.what());
   }
+}
+
+Explanation explain_asset(results::RunRow run, std::shared_ptr<const review::Policy> policy,
+                          results::ClassRow stored_class, results::AssetRow stored,
+                          std::optional<results::InputAsset> input) {
   review::ClassModel model = rebuild_class_model(stored_class, *policy);
   review::AssetReview again = recompute(stored, model, *policy);
   std::optional<OwnCosts> own;

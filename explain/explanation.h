@@ -2,9 +2,10 @@
 // and its policy, the class row and its rebuilt model, the asset's stored row, its analysis and
 // verdict recomputed from the stored inputs (explain/rebuild.h), its own cost history against the
 // class curve (explain/own_costs.h), and whatever the recomputation failed to reproduce.
-// explain_text.h and explain_json.h render it.
+// explain_text.h and explain_json.h render it; app/explain_run.h reads it from a database.
 //
-//   Explanation e = explain_asset(run, stored_class, stored_asset, input_asset);
+//   auto policy = run_policy(run);
+//   Explanation e = explain_asset(run, policy, stored_class, stored_asset, input_asset);
 //   e.reproduced();             // false when a stored figure differs from the recomputation
 //   e.review.decision->timing;  // k* and the present worths behind it
 #pragma once
@@ -15,7 +16,8 @@
 #include <vector>
 
 #include "explain/own_costs.h"
-#include "explain/stored_run.h"
+#include "results/input_asset.h"
+#include "results/rows.h"
 #include "review/asset_review.h"
 #include "review/class_model.h"
 #include "review/policy.h"
@@ -23,11 +25,11 @@
 namespace tenure::explain {
 
 struct Explanation {
-  StoredRun run;
+  results::RunRow run;
   std::shared_ptr<const review::Policy> policy;  // read from run.policy_json; model points into it
-  StoredClass stored_class;
-  StoredAsset stored;
-  std::optional<InputAsset> input;   // the asset's input row now; nullopt when it is gone
+  results::ClassRow stored_class;
+  results::AssetRow stored;
+  std::optional<results::InputAsset> input;   // the asset's input row now; nullopt when it is gone
   review::ClassModel model;
   review::AssetReview review;        // recomputed from the stored inputs
   std::optional<OwnCosts> own;       // with an input row and a class cost curve
@@ -38,9 +40,13 @@ struct Explanation {
   Rate basis_rate() const;
 };
 
-// Throws InputError naming "policy_json" when the run's stored policy no longer reads, and
-// RuntimeFailure when the class row cannot be rebuilt.
-Explanation explain_asset(StoredRun run, StoredClass stored_class, StoredAsset stored,
-                          std::optional<InputAsset> input);
+// The policy a run was made with, read from its stored text. Throws InputError naming
+// "policy_json" when it no longer reads.
+std::shared_ptr<const review::Policy> run_policy(const results::RunRow& run);
+
+// `policy` is run_policy(run). Throws RuntimeFailure when the class row cannot be rebuilt.
+Explanation explain_asset(results::RunRow run, std::shared_ptr<const review::Policy> policy,
+                          results::ClassRow stored_class, results::AssetRow stored,
+                          std::optional<results::InputAsset> input);
 
 }  // namespace tenure::explain

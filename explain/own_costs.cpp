@@ -5,7 +5,7 @@
 
 namespace tenure::explain {
 
-std::optional<OwnCosts> own_costs(const InputAsset& input, Date as_of, Rate cost_escalation,
+std::optional<OwnCosts> own_costs(const results::InputAsset& input, Date as_of, Rate cost_escalation,
                                   const fleet::CostCurve& curve) {
   const auto in_service = parse_iso_date(input.in_service_on);
   std::optional<Date> retired;
@@ -19,7 +19,7 @@ std::optional<OwnCosts> own_costs(const InputAsset& input, Date as_of, Rate cost
   const auto asset = history.add_asset(*in_service, retired);
   OwnCosts out{*in_service, {}, {}, 0, 0, input.events_unreadable};
   std::vector<std::size_t> events(static_cast<std::size_t>(history.complete_years(asset)), 0);
-  for (const CostEventRow& event : input.events) {
+  for (const results::CostEventRow& event : input.events) {
     const auto day = parse_iso_date(event.occurred_on);
     if (!day) {
       ++out.events_not_usable;

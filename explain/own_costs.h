@@ -13,7 +13,7 @@
 #include <optional>
 #include <vector>
 
-#include "explain/stored_run.h"
+#include "results/input_asset.h"
 #include "fleet/cost_curve.h"
 #include "fleet/credibility.h"
 #include "fleet/date.h"
@@ -38,7 +38,7 @@ struct OwnCosts {
 
 // nullopt when the input row's in_service_on or retired_on is not a valid date (the row changed
 // since the run, which would have rejected it).
-std::optional<OwnCosts> own_costs(const InputAsset& input, Date as_of, Rate cost_escalation,
+std::optional<OwnCosts> own_costs(const results::InputAsset& input, Date as_of, Rate cost_escalation,
                                   const fleet::CostCurve& curve);
 
 }  // namespace tenure::explain

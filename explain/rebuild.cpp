@@ -10,23 +10,12 @@
 namespace tenure::explain {
 namespace {
 
-fleet::CostModel cost_model_named(const std::string& name) {
-  if (name == fleet::name(fleet::CostModel::linear)) return fleet::CostModel::linear;
-  if (name == fleet::name(fleet::CostModel::geometric)) return fleet::CostModel::geometric;
-  throw RuntimeFailure("stored cost_model '" + name + "' is not linear or geometric");
-}
-
-fleet::ValueModel value_model_named(const std::string& name) {
-  if (name == fleet::name(fleet::ValueModel::fitted)) return fleet::ValueModel::fitted;
-  if (name == fleet::name(fleet::ValueModel::policy)) return fleet::ValueModel::policy;
-  throw RuntimeFailure("stored value_model '" + name + "' is not fitted or policy");
-}
-
 // A figure as people read it and to the last bit, so a difference in the 17th digit shows.
 template <class T>
 std::string shown(const std::optional<T>& value) {
   if (!value) return "none";
   if constexpr (std::is_floating_point_v<T>) return fmt::format("{:.17g}", *value);
+  else if constexpr (std::is_enum_v<T>) return to_string(*value);
   else return fmt::format("{}", *value);
 }
 
@@ -40,7 +29,8 @@ void compare(std::vector<std::string>& out, const char* name, const std::optiona
 
 }  // namespace
 
-review::ClassModel rebuild_class_model(const StoredClass& stored, const review::Policy& policy) {
+review::ClassModel rebuild_class_model(const results::ClassRow& stored,
+                                       const review::Policy& policy) {
   const auto class_policy = policy.classes.find(stored.asset_class);
   if (class_policy == policy.classes.end()) {
     throw RuntimeFailure("the run's policy has no class '" + stored.asset_class + "'");
@@ -48,7 +38,7 @@ review::ClassModel rebuild_class_model(const StoredClass& stored, const review::
   std::optional<fleet::CostCurve> cost_curve;
   if (stored.cost_model) {
     // Only the model, a and g enter predict(); the rest is carried for display.
-    cost_curve = fleet::CostCurve{cost_model_named(*stored.cost_model),
+    cost_curve = fleet::CostCurve{*stored.cost_model,
                                   stored.cost_a.value_or(0),
                                   stored.cost_g.value_or(0),
                                   stored.cost_r2.value_or(0),
@@ -57,7 +47,7 @@ review::ClassModel rebuild_class_model(const StoredClass& stored, const review::
                                   static_cast<std::size_t>(stored.assets),
                                   false};
   }
-  const fleet::ValueCurve value_curve{value_model_named(stored.value_model), stored.value_start,
+  const fleet::ValueCurve value_curve{stored.value_model, stored.value_start,
                                       stored.value_decline,
                                       static_cast<std::size_t>(stored.valuations_used)};
   return review::make_class_model(stored.asset_class, class_policy->second,
@@ -65,7 +55,7 @@ review::ClassModel rebuild_class_model(const StoredClass& stored, const review::
                                   value_curve, policy.rates);
 }
 
-review::DefenderInputs rebuild_defender_inputs(const StoredAsset& stored,
+review::DefenderInputs rebuild_defender_inputs(const results::AssetRow& stored,
                                                const review::ClassModel& model) {
   review::DefenderInputs in;
   in.age_years = stored.age_years;
@@ -83,12 +73,13 @@ review::DefenderInputs rebuild_defender_inputs(const StoredAsset& stored,
   return in;
 }
 
-review::AssetReview recompute(const StoredAsset& stored, const review::ClassModel& model,
+review::AssetReview recompute(const results::AssetRow& stored, const review::ClassModel& model,
                               const review::Policy& policy) {
   return review::judge(0, rebuild_defender_inputs(stored, model), model, policy);
 }
 
-std::vector<std::string> differences(const StoredAsset& stored, const review::AssetReview& again) {
+std::vector<std::string> differences(const results::AssetRow& stored,
+                                     const review::AssetReview& again) {
   std::vector<std::string> out;
   const replacement::Decision* d = again.decision ? &*again.decision : nullptr;
   compare(out, "defender_euac", stored.defender_euac,
@@ -99,12 +90,9 @@ std::vector<std::string> differences(const StoredAsset& stored, const review::As
           again.marginal_cost_next_year);
   compare(out, "replace_after_years", stored.replace_after_years,
           d ? std::optional<Years>(d->timing.keep_years) : std::nullopt);
-  compare(out, "verdict", std::optional<std::string>(stored.verdict),
-          std::optional<std::string>(review::to_string(again.verdict)));
-  compare(out, "reason", std::optional<std::string>(stored.reason),
-          std::optional<std::string>(again.reason));
-  compare(out, "basis", std::optional<std::string>(stored.basis),
-          std::optional<std::string>(replacement::to_string(again.basis)));
+  compare(out, "verdict", std::optional(stored.verdict), std::optional(again.finding.verdict));
+  compare(out, "reason", std::optional(stored.reason), std::optional(again.finding.reason));
+  compare(out, "basis", std::optional(stored.basis), std::optional(again.basis));
   compare(out, "book_value_now", std::optional<Money>(stored.book_value_now),
           std::optional<Money>(again.book_value_now));
   compare(out, "class_esl_years", stored.class_esl_years, again.class_esl_years);

@@ -13,7 +13,7 @@
 #include <string>
 #include <vector>
 
-#include "explain/stored_run.h"
+#include "results/rows.h"
 #include "review/asset_review.h"
 #include "review/class_model.h"
 #include "review/policy.h"
@@ -21,17 +21,17 @@
 namespace tenure::explain {
 
 // The class model of a stored class row. The model points into `policy`, which must outlive it.
-// Throws RuntimeFailure when the policy has no such class, or the stored row names an unknown
-// cost or value model.
-review::ClassModel rebuild_class_model(const StoredClass& stored, const review::Policy& policy);
+// Throws RuntimeFailure when the policy has no such class.
+review::ClassModel rebuild_class_model(const results::ClassRow& stored,
+                                       const review::Policy& policy);
 
 // The defender as the run saw it: its age, market value now and where that came from, its
 // credibility (m, r and factor as stored; z = m / (m + 3)) and its future on the class curves.
-review::DefenderInputs rebuild_defender_inputs(const StoredAsset& stored,
+review::DefenderInputs rebuild_defender_inputs(const results::AssetRow& stored,
                                                const review::ClassModel& model);
 
 // The asset's analysis and verdict, recomputed by review::judge.
-review::AssetReview recompute(const StoredAsset& stored, const review::ClassModel& model,
+review::AssetReview recompute(const results::AssetRow& stored, const review::ClassModel& model,
                               const review::Policy& policy);
 
 // One line per stored figure the recomputation does not reproduce exactly, e.g.
@@ -39,6 +39,7 @@ review::AssetReview recompute(const StoredAsset& stored, const review::ClassMode
 // defender_euac, challenger_euac, marginal_cost_next_year, replace_after_years, verdict, reason,
 // and also book_value_now, class_esl_years, defender_best_years and both before/after-tax
 // defender EUACs.
-std::vector<std::string> differences(const StoredAsset& stored, const review::AssetReview& again);
+std::vector<std::string> differences(const results::AssetRow& stored,
+                                     const review::AssetReview& again);
 
 }  // namespace tenure::explain

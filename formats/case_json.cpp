@@ -114,15 +114,15 @@ json asset_to_json(const replacement::AssetAnalysis& asset, const char* best_key
   return out;
 }
 
-json decision_to_json(const replacement::Decision& decision) {
+json decision_to_json(const replacement::Decision& decision, const review::VerdictFinding& finding) {
   json timing = json::array();
   for (std::size_t k = 0; k < decision.timing.present_worth.size(); ++k) {
     timing.push_back({{"keep_years", k}, {"present_worth_cost", decision.timing.present_worth[k]}});
   }
   return {{"basis", replacement::to_string(decision.basis)},
-          {"verdict", replacement::to_string(decision.verdict)},
+          {"verdict", review::to_string(finding.verdict)},
           {"replace_after_years", decision.timing.keep_years},
-          {"reason", decision.reason},
+          {"reason", finding.reason},
           {"challenger_euac", decision.challenger_euac},
           {"challenger_esl_years", decision.challenger_esl},
           {"defender_euac", decision.defender_euac},
@@ -143,6 +143,13 @@ json study_period_to_json(const replacement::StudyPeriod& study, replacement::Ba
 }
 
 }  // namespace
+
+review::VerdictFinding case_finding(const replacement::CaseResult& result) {
+  const replacement::Decision& d = *result.decision;
+  const replacement::BasisAnalysis& defender = result.defender->on(d.basis);
+  return review::case_verdict(
+      review::figures_of(d, defender.curve.marginal_costs[0], defender.costs.max_years()));
+}
 
 replacement::Case read_case(std::string_view json_text) {
   const json document = parse_json_text(json_text);
@@ -178,7 +185,7 @@ json case_result_to_json(const replacement::CaseResult& result, const tax::Rates
                                     {"after_tax", now.net_proceeds}};
     out["defender"] = std::move(defender);
   }
-  if (result.decision) out["decision"] = decision_to_json(*result.decision);
+  if (result.decision) out["decision"] = decision_to_json(*result.decision, case_finding(result));
   if (result.study_period) {
     out["study_period"] = study_period_to_json(*result.study_period, result.basis);
   }

@@ -17,6 +17,7 @@
 #include <nlohmann/json.hpp>
 
 #include "replacement/case_analysis.h"
+#include "review/verdict_rule.h"
 #include "tax/rates.h"
 
 namespace tenure::formats {
@@ -27,5 +28,9 @@ replacement::Case read_case(std::string_view json_text);
 // cash_flows}, defender {before_tax, after_tax, opportunity_cost, cash_flows} and decision (with
 // a defender), study_period (when asked). `rates` are the ones the case ran at.
 nlohmann::json case_result_to_json(const replacement::CaseResult& result, const tax::Rates& rates);
+
+// The verdict on a case's defender (review/verdict_rule.h, rules (1) and (4)); the result must
+// have a decision.
+review::VerdictFinding case_finding(const replacement::CaseResult& result);
 
 }  // namespace tenure::formats

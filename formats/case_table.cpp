@@ -3,6 +3,7 @@
 
 #include <fmt/format.h>
 
+#include "formats/case_json.h"
 #include "formats/caution.h"
 #include "formats/text_table.h"
 
@@ -80,7 +81,8 @@ std::string opportunity_cost(const tax::SaleFlow& now) {
   return "Defender: its opportunity cost\n" + table.render();
 }
 
-std::string decision_text(const replacement::Decision& decision) {
+std::string decision_text(const replacement::Decision& decision,
+                          const review::VerdictFinding& finding) {
   TextTable timing({"keep defender (years)", "present worth of cost"});
   for (std::size_t k = 0; k < decision.timing.present_worth.size(); ++k) {
     timing.add_row(
@@ -88,14 +90,14 @@ std::string decision_text(const replacement::Decision& decision) {
                                    static_cast<Years>(k) == decision.timing.keep_years)});
   }
   const std::string verdict =
-      decision.verdict == replacement::Verdict::replace
+      finding.verdict == review::Verdict::replace
           ? "REPLACE now"
           : "KEEP for " + years(decision.timing.keep_years) + ", then replace";
   return fmt::format(
       "Replacement timing ({} basis; the challenger repeated at its least EUAC {}; * = best)\n"
       "{}\nDecision: {}\n  {}\n",
       basis_words(decision.basis), money(decision.challenger_euac), timing.render(), verdict,
-      decision.reason);
+      finding.reason);
 }
 
 std::string study_period_text(const replacement::StudyPeriod& study, Basis basis) {
@@ -126,7 +128,7 @@ std::string case_result_to_table(const replacement::CaseResult& result, const ta
                     *result.defender));
     sections.push_back(cash_flow_tables("Defender", result.defender->table));
   }
-  if (result.decision) sections.push_back(decision_text(*result.decision));
+  if (result.decision) sections.push_back(decision_text(*result.decision, case_finding(result)));
   if (result.study_period) {
     sections.push_back(study_period_text(*result.study_period, result.basis));
   }

@@ -11,9 +11,8 @@
 
 #include "core/errors.h"
 #include "core/version.h"
-#include "formats/case_json.h"
+#include "app/case_run.h"
 #include "plugin/review_call.h"
-#include "replacement/case_analysis.h"
 
 namespace tenure::plugin {
 namespace {
@@ -87,10 +86,7 @@ int tenure_case_json(const char* case_json, char** result_json, char** error_mes
   return guarded_call(error_message, [&] {
     tenure::plugin::require_pointer(case_json, "case_json");
     tenure::plugin::require_pointer(result_json, "result_json");
-    const tenure::replacement::Case input = tenure::formats::read_case(case_json);
-    const std::string json =
-        tenure::formats::case_result_to_json(tenure::replacement::analyse(input), input.rates)
-            .dump(2);
+    const std::string json = tenure::app::case_result_json(case_json).dump(2);
     *result_json = tenure::plugin::copy(json);
     if (*result_json == nullptr) throw std::bad_alloc();
   });

@@ -30,10 +30,9 @@
 // To nest the result inside json_object(), wrap it in json(): it is returned as plain text.
 //
 // Deterministic and innocuous: the result depends on the argument only.
-#include "formats/case_json.h"
+#include "app/case_run.h"
 #include "plugin/functions.h"
 #include "plugin/sql_arguments.h"
-#include "replacement/case_analysis.h"
 
 namespace tenure::plugin {
 namespace {
@@ -45,9 +44,7 @@ const Signature kCase{"tenure_case", {"case_json"}};
 void case_function(sqlite3_context* context, int argc, sqlite3_value** argv) {
   guarded(context, kCase, [&] {
     const Arguments args(kCase, argc, argv);
-    const replacement::Case input = formats::read_case(args.text("case_json"));
-    const std::string json =
-        formats::case_result_to_json(replacement::analyse(input), input.rates).dump();
+    const std::string json = app::case_result_json(args.text("case_json")).dump();
     sqlite3_result_text(context, json.data(), static_cast<int>(json.size()), SQLITE_TRANSIENT);
   });
 }

@@ -3,7 +3,7 @@
 
 #include "core/errors.h"
 #include "db/connection.h"
-#include "db/review_run.h"
+#include "app/review_run.h"
 #include "fleet/date.h"
 
 namespace tenure::plugin {
@@ -23,7 +23,7 @@ void refuse_inside_writing_statement(sqlite3* db) {
 
 std::int64_t review_on(sqlite3* db, const std::optional<std::string>& policy_json,
                        const std::optional<std::string>& as_of) {
-  db::ReviewOptions options;
+  app::ReviewOptions options;
   options.policy_json = policy_json;
   if (as_of) {
     options.as_of = parse_iso_date(*as_of);
@@ -31,7 +31,7 @@ std::int64_t review_on(sqlite3* db, const std::optional<std::string>& policy_jso
   }
   refuse_inside_writing_statement(db);
   db::Connection connection = db::Connection::borrow(db);
-  return db::run_review(connection, options).run_id;
+  return app::run_review(connection, options).run_id;
 }
 
 }  // namespace tenure::plugin

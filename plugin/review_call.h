@@ -1,5 +1,5 @@
 // The nightly review on a connection the caller owns, shared by the SQL function tenure_review
-// and the C ABI's tenure_review_db: db::run_review on a borrowed connection, after the checks
+// and the C ABI's tenure_review_db: app::run_review on a borrowed connection, after the checks
 // that make it safe to run from inside the caller's own SQL.
 //
 // Transactions (db/connection.h, Transaction): in autocommit mode the review commits its own

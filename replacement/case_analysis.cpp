@@ -2,10 +2,7 @@
 // (see case_analysis.h).
 #include "replacement/case_analysis.h"
 
-#include <fmt/format.h>
-
 #include "core/errors.h"
-#include "replacement/reason_text.h"
 
 namespace tenure::replacement {
 
@@ -26,30 +23,6 @@ AssetAnalysis analyse_asset(const Ownership& asset, const tax::Rates& rates) {
   return result;
 }
 
-namespace {
-
-std::string reason_for(const Decision& d, Years max_years) {
-  const std::string basis = d.basis == Basis::after_tax ? "after-tax" : "before-tax";
-  if (d.timing.keep_years == 0) {
-    return fmt::format(
-        "Replace now: on an {} basis the defender's least EUAC is {} (keeping {}) against the "
-        "challenger's {} (economic life {}), and no period of keeping it costs less than "
-        "replacing it at once.",
-        basis, reason_money(d.defender_euac), reason_years(d.defender_best_years),
-        reason_money(d.challenger_euac), reason_years(d.challenger_esl));
-  }
-  const std::string horizon =
-      d.timing.keep_years == max_years ? " (the end of the years given for it)" : "";
-  return fmt::format(
-      "Keep the defender {} more{} and then replace it: on an {} basis its least EUAC is {} "
-      "(keeping {}) against the challenger's {} (economic life {}).",
-      reason_years(d.timing.keep_years), horizon, basis, reason_money(d.defender_euac),
-      reason_years(d.defender_best_years), reason_money(d.challenger_euac),
-      reason_years(d.challenger_esl));
-}
-
-}  // namespace
-
 Decision decide(const AssetAnalysis& defender, const AssetAnalysis& challenger,
                 const tax::Rates& rates) {
   Decision d{};
@@ -61,8 +34,6 @@ Decision decide(const AssetAnalysis& defender, const AssetAnalysis& challenger,
   d.defender_euac = def.curve.best_euac;
   d.defender_best_years = def.curve.best_years;
   d.timing = optimal_replacement(def.costs, d.challenger_euac);
-  d.verdict = d.timing.keep_years == 0 ? Verdict::replace : Verdict::keep;
-  d.reason = reason_for(d, def.costs.max_years());
   return d;
 }
 
@@ -92,7 +63,5 @@ CaseResult analyse(const Case& input) {
 const char* to_string(Basis basis) {
   return basis == Basis::after_tax ? "after_tax" : "before_tax";
 }
-
-const char* to_string(Verdict verdict) { return verdict == Verdict::keep ? "keep" : "replace"; }
 
 }  // namespace tenure::replacement

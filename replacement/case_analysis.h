@@ -1,14 +1,14 @@
 // One whole replacement analysis (SPEC 5 and 6): the challenger's economic service life before
-// and after tax, the defender's best remaining life and marginal costs, the keep/replace
-// decision from the optimal replacement timing, and an optional study period.
+// and after tax, the defender's best remaining life and marginal costs, the decision's figures
+// from the optimal replacement timing, and an optional study period. The verdict the figures
+// lead to is review/verdict_rule.h's.
 //
 //   Case c{Rates::make(0.10, 0.25), challenger, defender, 3};
 //   CaseResult r = analyse(c);
-//   r.decision->verdict;   // Verdict::keep or Verdict::replace
+//   r.decision->timing.keep_years;   // k*: 0 means replace now
 #pragma once
 
 #include <optional>
-#include <string>
 
 #include "core/types.h"
 #include "replacement/keeping_costs.h"
@@ -40,17 +40,14 @@ struct AssetAnalysis {
   const BasisAnalysis& on(Basis basis) const;
 };
 
-enum class Verdict { keep, replace };
-
+// The figures of a defender against a challenger, on the basis.
 struct Decision {
   Basis basis;              // after_tax when income_tax_rate > 0
-  Verdict verdict;          // replace when keep_years == 0
-  Timing timing;
+  Timing timing;            // k* and the present worths behind it
   Money challenger_euac;    // challenger's least EUAC on the basis
   Years challenger_esl;
   Money defender_euac;      // defender's least EUAC on the basis
   Years defender_best_years;
-  std::string reason;       // one sentence with the numbers
 };
 
 struct CaseResult {
@@ -72,6 +69,5 @@ Decision decide(const AssetAnalysis& defender, const AssetAnalysis& challenger,
                 const tax::Rates& rates);
 
 const char* to_string(Basis basis);
-const char* to_string(Verdict verdict);
 
 }  // namespace tenure::replacement

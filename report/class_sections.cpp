@@ -17,9 +17,9 @@ namespace {
 // The challenger's stored curve on one basis, as chart points.
 std::vector<std::pair<double, double>> curve_points(const PageModel& m,
                                                     const std::string& asset_class,
-                                                    const char* basis) {
+                                                    replacement::Basis basis) {
   std::vector<std::pair<double, double>> out;
-  for (const explain::CurvePoint& p : m.data->challenger_curves) {
+  for (const results::CurveRow& p : m.data->challenger_curves) {
     if (p.asset_class == asset_class && p.basis == basis) out.emplace_back(p.years, p.euac);
   }
   return out;
@@ -33,12 +33,12 @@ void add_least(Chart& chart, const std::string& name, const std::optional<Years>
                           {{*years, *euac}}, colour, Stroke::solid, Marker::diamond});
 }
 
-std::string euac_chart(const PageModel& m, const explain::StoredClass& c) {
+std::string euac_chart(const PageModel& m, const results::ClassRow& c) {
   Chart chart{fmt::format("{}: what a new unit costs a year, by years kept", c.asset_class),
               "years kept (life of a new unit)", "EUAC (money units per year)"};
-  chart.series.push_back({"before tax", curve_points(m, c.asset_class, "before_tax"),
+  chart.series.push_back({"before tax", curve_points(m, c.asset_class, replacement::Basis::before_tax),
                           colour::kBlue, Stroke::solid, Marker::circle});
-  const auto after = curve_points(m, c.asset_class, "after_tax");
+  const auto after = curve_points(m, c.asset_class, replacement::Basis::after_tax);
   if (!after.empty()) {
     chart.series.push_back({"after tax", after, colour::kVermillion, Stroke::dashed,
                             Marker::square});
@@ -58,10 +58,10 @@ std::string euac_chart(const PageModel& m, const explain::StoredClass& c) {
   return render_chart(chart);
 }
 
-std::string age_chart(const PageModel& m, const explain::StoredClass& c) {
+std::string age_chart(const PageModel& m, const results::ClassRow& c) {
   std::map<Years, std::size_t> ages;
   Years oldest = 0;
-  for (const explain::StoredAsset& a : m.data->assets) {
+  for (const results::AssetRow& a : m.data->assets) {
     if (a.asset_class != c.asset_class) continue;
     ++ages[a.age_years];
     oldest = std::max(oldest, a.age_years);
@@ -94,13 +94,14 @@ std::string class_sections(const PageModel& m) {
       "<p>For each class, the left chart shows what a new unit (the challenger) costs per year "
       "for each number of years it is kept; the least point is the class's economic life. The "
       "right chart shows how old the units in service are against that life.</p>";
-  for (const explain::StoredClass& c : m.data->classes) {
+  for (const results::ClassRow& c : m.data->classes) {
     const auto model = m.models.find(c.asset_class);
     out += fmt::format("<section class=\"class\" id=\"class-{}\"><h3>{}</h3>",
                        &c - m.data->classes.data(), escape(c.asset_class));
     if (!c.cost_model) {
       out += fmt::format("<p class=\"warn\">{}</p></section>",
-                         escape(model == m.models.end() ? c.note : model->second.note));
+                         escape(model == m.models.end() ? c.note.value_or("")
+                                                        : model->second.note));
       continue;
     }
     const auto esl = m.esl(c);
@@ -109,8 +110,8 @@ std::string class_sections(const PageModel& m) {
         "fitted on {} asset-years.</p>",
         formats::money(c.challenger_first_cost), esl ? formats::years(*esl) : "-",
         money_cell(m.least_euac(c)), m.after_tax() ? "after tax" : "before tax",
-        escape(*c.cost_model), grouped(static_cast<double>(c.asset_years), 0));
-    if (!c.note.empty()) out += "<p class=\"warn\">" + escape(c.note) + "</p>";
+        escape(fleet::name(*c.cost_model)), grouped(static_cast<double>(c.asset_years), 0));
+    if (c.note) out += "<p class=\"warn\">" + escape(*c.note) + "</p>";
     out += fmt::format(
         "<div class=\"charts\"><figure>{}<figcaption>Before tax at the MARR (solid), after tax "
         "at the after-tax MARR (dashed); diamonds mark each least EUAC.</figcaption></figure>"

@@ -18,14 +18,14 @@ std::string years_cell(const std::optional<Years>& n) {
   return n ? std::to_string(*n) : std::string("-");
 }
 
-std::string replace_words(const explain::StoredAsset& a) {
+std::string replace_words(const results::AssetRow& a) {
   if (!a.replace_after_years) return "-";
   if (*a.replace_after_years == 0) return "now";
   return "after " + formats::years(*a.replace_after_years);
 }
 
 std::string marginal_chart(const DueAsset& due) {
-  const explain::StoredAsset& a = *due.stored;
+  const results::AssetRow& a = *due.stored;
   const review::AssetReview& r = *due.again;
   const replacement::LifeCurve& curve = r.defender->on(r.basis).curve;
   const replacement::Decision& d = *r.decision;
@@ -66,7 +66,7 @@ std::string due_list(const PageModel& m) {
   const std::size_t shown = std::min(m.due.size(), kMaxDueRows);
   for (std::size_t i = 0; i < shown; ++i) {
     const DueAsset& due = m.due[i];
-    const explain::StoredAsset& a = *due.stored;
+    const results::AssetRow& a = *due.stored;
     // One <tbody> per asset: its figures, then its reason across the whole width.
     items += fmt::format(
         "<tbody class=\"item\"><tr><td class=\"id\">{}{}</td><td class=\"id\">{}</td>"
@@ -113,7 +113,7 @@ std::string due_charts(const PageModel& m) {
   const std::size_t shown = std::min(m.due.size(), kMaxAssetCharts);
   for (std::size_t i = 0; i < shown; ++i) {
     const DueAsset& due = m.due[i];
-    const explain::StoredAsset& a = *due.stored;
+    const results::AssetRow& a = *due.stored;
     out += fmt::format("<article class=\"card\" id=\"due-{}\"><h3>{} {}{}</h3><p class=\"sub\">{} "
                        "&middot; age {} &middot; economic life {} &middot; replace {}</p>",
                        i, escape(a.asset_id), verdict_badge(a.verdict),

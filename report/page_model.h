@@ -16,7 +16,7 @@
 namespace tenure::report {
 
 struct DueAsset {
-  const explain::StoredAsset* stored;
+  const results::AssetRow* stored;
   bool newly_due;
   // Recomputed with the year-by-year analysis for the assets that get a chart (the first
   // kMaxAssetCharts); `reproduced` says whether it equals the stored row.
@@ -40,8 +40,8 @@ struct PageModel {
 
   bool after_tax() const;
   // The class's economic life on the run's basis; nullopt without a challenger.
-  std::optional<Years> esl(const explain::StoredClass& c) const;
-  std::optional<Money> least_euac(const explain::StoredClass& c) const;
+  std::optional<Years> esl(const results::ClassRow& c) const;
+  std::optional<Money> least_euac(const results::ClassRow& c) const;
 };
 
 // The pieces of the page, in page order.
@@ -55,8 +55,8 @@ std::string due_charts(const PageModel& m);
 std::string rejected_rows(const PageModel& m);
 std::string reading_guide(const PageModel& m);
 
-// "<span class=\"badge replace\">REPLACE</span>" for "replace", and so on.
-std::string verdict_badge(const std::string& verdict);
+// "<span class=\"badge replace\">REPLACE</span>" for replace, and so on.
+std::string verdict_badge(review::Verdict verdict);
 // Money for a table cell, whole units with separators; "-" when absent.
 std::string money_cell(const std::optional<Money>& amount);
 

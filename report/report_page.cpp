@@ -7,7 +7,6 @@
 
 #include "core/errors.h"
 #include "explain/rebuild.h"
-#include "formats/policy_json.h"
 #include "formats/text_table.h"
 #include "report/html.h"
 #include "report/page_model.h"
@@ -15,31 +14,27 @@
 namespace tenure::report {
 namespace {
 
-int urgency(const std::string& verdict) { return verdict == "replace" ? 0 : 1; }
+int urgency(review::Verdict verdict) { return verdict == review::Verdict::replace ? 0 : 1; }
 
 // How much a year of keeping costs over the challenger, on the basis: the list's second key.
-Money excess(const explain::StoredAsset& a) {
+Money excess(const results::AssetRow& a) {
   if (!a.defender_euac || !a.challenger_euac) return 0;
   return *a.defender_euac - *a.challenger_euac;
 }
 
 PageModel build_model(const ReportData& data) {
-  PageModel m{&data, nullptr, {}, {}, {}, {}, 0};
-  try {
-    m.policy = std::make_shared<const review::Policy>(formats::read_policy(data.run.policy_json));
-  } catch (const InputError& error) {
-    throw InputError("policy_json", fmt::format("the policy stored with run {} does not read: {}",
-                                                data.run.run_id, error.what()));
-  }
-  for (const explain::StoredClass& c : data.classes) {
+  PageModel m{&data, data.policy, {}, {}, {}, {}, 0};
+  for (const results::ClassRow& c : data.classes) {
     m.models.emplace(c.asset_class, explain::rebuild_class_model(c, *m.policy));
   }
-  for (const explain::StoredAsset& a : data.assets) {
+  for (const results::AssetRow& a : data.assets) {
     VerdictCounts& in_class = m.counts_by_class[a.asset_class];
     for (VerdictCounts* counts : {&m.counts, &in_class}) {
-      if (a.verdict == "replace") ++counts->replace;
-      else if (a.verdict == "review") ++counts->review;
-      else ++counts->keep;
+      switch (a.verdict) {
+        case review::Verdict::replace: ++counts->replace; break;
+        case review::Verdict::review: ++counts->review; break;
+        case review::Verdict::keep: ++counts->keep; break;
+      }
     }
     if (!a.due()) continue;
     const bool newly = !data.due_before.contains(a.asset_id);
@@ -67,19 +62,21 @@ PageModel build_model(const ReportData& data) {
 
 }  // namespace
 
-bool PageModel::after_tax() const { return data->run.basis == "after_tax"; }
+bool PageModel::after_tax() const { return data->run.basis == replacement::Basis::after_tax; }
 
-std::optional<Years> PageModel::esl(const explain::StoredClass& c) const {
+std::optional<Years> PageModel::esl(const results::ClassRow& c) const {
   return after_tax() ? c.esl_years_after_tax : c.esl_years_before_tax;
 }
 
-std::optional<Money> PageModel::least_euac(const explain::StoredClass& c) const {
+std::optional<Money> PageModel::least_euac(const results::ClassRow& c) const {
   return after_tax() ? c.euac_after_tax : c.euac_before_tax;
 }
 
-std::string verdict_badge(const std::string& verdict) {
-  const std::string shown = verdict == "replace" ? "REPLACE" : verdict == "review" ? "REVIEW" : "KEEP";
-  return fmt::format("<span class=\"badge {}\">{}</span>", escape(verdict), shown);
+std::string verdict_badge(review::Verdict verdict) {
+  const char* shown = verdict == review::Verdict::replace  ? "REPLACE"
+                      : verdict == review::Verdict::review ? "REVIEW"
+                                                           : "KEEP";
+  return fmt::format("<span class=\"badge {}\">{}</span>", review::to_string(verdict), shown);
 }
 
 std::string money_cell(const std::optional<Money>& amount) {

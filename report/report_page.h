@@ -26,7 +26,7 @@ inline constexpr std::size_t kMaxAssetCharts = 200;
 // Rejected rows listed in the page (the count is always complete).
 inline constexpr std::size_t kMaxRejectedRows = 20;
 
-// Throws InputError naming "policy_json" when the run's stored policy no longer reads.
+// Throws RuntimeFailure when a class row cannot be rebuilt.
 std::string render_report(const ReportData& data);
 
 }  // namespace tenure::report

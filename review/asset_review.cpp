@@ -1,30 +1,11 @@
 // One asset's defender analysis and verdict (see asset_review.h).
 #include "review/asset_review.h"
 
-#include <fmt/format.h>
-
 #include <algorithm>
-#include <cmath>
 
 #include "depreciation/schedule.h"
-#include "replacement/reason_text.h"
 
 namespace tenure::review {
-
-using replacement::reason_money;
-using replacement::reason_years;
-
-const char* to_string(Verdict verdict) {
-  switch (verdict) {
-    case Verdict::keep:
-      return "keep";
-    case Verdict::review:
-      return "review";
-    case Verdict::replace:
-      return "replace";
-  }
-  return "keep";
-}
 
 Date one_year_before(Date as_of) {
   const int day = as_of.month() == 2 && as_of.day() == 29 ? 28 : as_of.day();
@@ -88,16 +69,12 @@ AssetReview judge(std::size_t asset, DefenderInputs inputs, const ClassModel& mo
   AssetReview r{};
   r.asset = asset;
   r.inputs = std::move(inputs);
-  r.verdict = Verdict::review;
   r.basis = rates.after_tax() ? replacement::Basis::after_tax : replacement::Basis::before_tax;
   if (!model.challenger) {
     r.book_value_now =
         depreciation::Schedule(*r.inputs.ownership.depreciation, r.inputs.ownership.first_cost)
             .book_value(r.inputs.age_years);
-    r.reason = fmt::format(
-        "Review: {}; tenure cannot weigh this asset until the class has a "
-        "complete year of costs.",
-        model.note);
+    r.finding = cannot_weigh(model.note);
     return r;
   }
   r.defender = std::make_unique<replacement::AssetAnalysis>(
@@ -107,42 +84,12 @@ AssetReview judge(std::size_t asset, DefenderInputs inputs, const ClassModel& mo
   const replacement::Decision& d = *r.decision;
   r.defender_euac_before_tax = r.defender->before_tax.curve.best_euac;
   if (r.defender->after_tax) r.defender_euac_after_tax = r.defender->after_tax->curve.best_euac;
-  r.marginal_cost_next_year = r.defender->on(r.basis).curve.marginal_costs[0];
-  const Years esl = d.challenger_esl;
-  r.class_esl_years = esl;
-  const Years age = r.inputs.age_years;
-  const std::string basis = r.basis == replacement::Basis::after_tax ? "after-tax" : "before-tax";
-  const bool close =
-      std::abs(d.defender_euac - d.challenger_euac) <= policy.review_margin * d.challenger_euac;
-  if (d.timing.keep_years == 0) {
-    r.verdict = Verdict::replace;
-    r.reason = fmt::format(
-        "Replace: keeping it any longer costs more than a new unit; its least {} EUAC is {} "
-        "against the challenger's {} and next year's marginal cost is {}.",
-        basis, reason_money(d.defender_euac), reason_money(d.challenger_euac),
-        reason_money(*r.marginal_cost_next_year));
-  } else if (age >= esl) {
-    r.verdict = Verdict::review;
-    r.reason = fmt::format(
-        "Review: at {} it is at or past the class's economic life of {}; replacing after {} "
-        "more is cheapest ({} EUAC {} against the challenger's {}).",
-        reason_years(age), reason_years(esl), reason_years(d.timing.keep_years), basis,
-        reason_money(d.defender_euac), reason_money(d.challenger_euac));
-  } else if (close) {
-    r.verdict = Verdict::review;
-    r.reason = fmt::format(
-        "Review: its least {} EUAC of {} is within {:g}% of the challenger's {}; replacing "
-        "after {} more is cheapest.",
-        basis, reason_money(d.defender_euac), policy.review_margin * 100,
-        reason_money(d.challenger_euac), reason_years(d.timing.keep_years));
-  } else {
-    r.verdict = Verdict::keep;
-    r.reason = fmt::format(
-        "Keep: at {} it is short of the class's economic life of {}; its least {} EUAC is {} "
-        "against the challenger's {}, and replacing after {} more is cheapest.",
-        reason_years(age), reason_years(esl), basis, reason_money(d.defender_euac),
-        reason_money(d.challenger_euac), reason_years(d.timing.keep_years));
-  }
+  const replacement::BasisAnalysis& on_basis = r.defender->on(r.basis);
+  r.marginal_cost_next_year = on_basis.curve.marginal_costs[0];
+  r.class_esl_years = d.challenger_esl;
+  r.finding = nightly_verdict(
+      figures_of(d, *r.marginal_cost_next_year, on_basis.costs.max_years()),
+      r.inputs.age_years, policy.review_margin);
   return r;
 }
 

@@ -1,10 +1,11 @@
 // One asset in service in the nightly review (SPEC 6 "Nightly defender" and "Nightly verdict"):
 // its age, market value now, credibility-weighted future costs, its defender analysis against
-// the class challenger, the optimal replacement timing and a keep / review / replace verdict.
+// the class challenger, the optimal replacement timing and a keep / review / replace verdict
+// (verdict_rule.h).
 //
 //   AssetReview r = review_asset(index, data, vans, policy);
-//   r.verdict;   // Verdict::review
-//   r.reason;    // "Review: at 9 years it is past the class's economic life of 7 years; ..."
+//   r.finding.verdict;   // Verdict::review
+//   r.finding.reason;    // "Review: at 9 years it is at or past the class's economic life of ..."
 #pragma once
 
 #include <memory>
@@ -17,11 +18,9 @@
 #include "review/class_model.h"
 #include "review/fleet_data.h"
 #include "review/policy.h"
+#include "review/verdict_rule.h"
 
 namespace tenure::review {
-
-enum class Verdict { keep, review, replace };
-const char* to_string(Verdict verdict);
 
 // The defender as the engine sees it, and where its numbers came from.
 struct DefenderInputs {
@@ -35,8 +34,7 @@ struct DefenderInputs {
 struct AssetReview {
   std::size_t asset;  // index in FleetData::assets
   DefenderInputs inputs;
-  Verdict verdict;
-  std::string reason;
+  VerdictFinding finding;  // the verdict, each test's figures and the reason
   replacement::Basis basis;
   Money book_value_now;  // basis less the full deductions of its completed years
   // Summary figures, kept when the full analysis below is dropped (policy detail).
@@ -49,7 +47,7 @@ struct AssetReview {
   std::optional<replacement::Decision> decision;
   std::optional<Years> class_esl_years;  // the class challenger's ESL on the basis
 
-  bool due() const { return verdict != Verdict::keep; }
+  bool due() const { return finding.due(); }
 };
 
 // The date one year before `as_of` (29 February -> 28 February): valuations dated after it, up

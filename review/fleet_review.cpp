@@ -33,10 +33,7 @@ void compact(AssetReview& review) {
   review.defender.reset();
   review.inputs.ownership.operating_costs = std::vector<Money>();
   review.inputs.ownership.market_values = std::vector<Money>();
-  if (review.decision) {
-    review.decision->timing.present_worth = std::vector<Money>();
-    review.decision->reason = std::string();  // the review writes its own reason
-  }
+  if (review.decision) review.decision->timing.present_worth = std::vector<Money>();
 }
 
 }  // namespace

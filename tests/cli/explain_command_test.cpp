@@ -11,7 +11,7 @@
 #include <nlohmann/json.hpp>
 
 #include "db/connection.h"
-#include "db/review_run.h"
+#include "app/review_run.h"
 #include "fixtures/fleets/fixture_fleets.h"
 #include "run_tenure.h"
 
@@ -30,7 +30,7 @@ class ExplainCommand : public ::testing::Test {
     db::Connection db = db::Connection::open(path, true);
     fixtures::create_input_tables(db.handle());
     fixtures::add_noiseless_fleet(db.handle());
-    db::run_review(db, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
+    app::run_review(db, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
   }
   nlohmann::json explain_json(const std::string& asset) {
     const testing::Run r = run_tenure({"explain", "--db", path, asset, "--format", "json"});
@@ -152,7 +152,7 @@ TEST_F(ExplainCommand, UnknownAssetIsExitTwo) {
 TEST_F(ExplainCommand, UnknownRunIsExitTwoAndAnOlderRunCanBeNamed) {
   {
     db::Connection db = db::Connection::open(path);
-    db::run_review(db, {fixtures::noiseless_policy(), parse_iso_date("2026-12-31"), {}, {}});
+    app::run_review(db, {fixtures::noiseless_policy(), parse_iso_date("2026-12-31"), {}, {}});
   }
   const testing::Run old = run_tenure({"explain", "--db", path, "PF-005", "--run", "1", "--format", "json"});
   ASSERT_EQ(old.exit_code, 0) << old.err;

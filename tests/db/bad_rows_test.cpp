@@ -4,7 +4,7 @@
 
 #include <fmt/format.h>
 
-#include "db/review_run.h"
+#include "app/review_run.h"
 #include "db_test_support.h"
 #include "fixtures/fleets/fixture_fleets.h"
 
@@ -90,7 +90,7 @@ class BadRows : public ::testing::Test {
 TEST_F(BadRows, EveryKindIsRejectedWithItsReasonAndTheRestIsReviewed) {
   Connection db = file.open();
   for (const BadRow& bad : kBadRows) db.exec(bad.insert);
-  const RunSummary s = run_review(db, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
+  const app::RunSummary s = app::run_review(db, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
   EXPECT_EQ(s.rows_rejected, static_cast<std::int64_t>(std::size(kBadRows)));
   for (const BadRow& bad : kBadRows) {
     SCOPED_TRACE(bad.insert);
@@ -116,7 +116,7 @@ TEST_F(BadRows, RowsDatedAfterTheAsOfDateAreCountedNotRejected) {
   Connection db = file.open();
   db.exec("INSERT INTO cost_event VALUES ('PF-002', '2027-01-01', 10, 'repair');"
           "INSERT INTO asset_valuation VALUES ('PF-002', '2027-01-01', 100, 'x');");
-  const RunSummary s = run_review(db, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
+  const app::RunSummary s = app::run_review(db, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
   EXPECT_EQ(s.rows_rejected, 0);
   EXPECT_GE(s.rows_after_as_of, 2);
   EXPECT_EQ(scalar(db, fmt::format("SELECT rows_after_as_of FROM tenure_run WHERE run_id = {}", s.run_id)),

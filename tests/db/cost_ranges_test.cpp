@@ -15,7 +15,7 @@
 #include "db/demo_writer.h"
 #include "db/fleet_reader.h"
 #include "db/policy_store.h"
-#include "db/review_run.h"
+#include "app/review_run.h"
 #include "db_test_support.h"
 #include "formats/policy_json.h"
 
@@ -135,19 +135,19 @@ class DemoFleet : public ::testing::Test {
             " ('NO-SUCH-UNIT', '2024-01-01', 10),"
             " ('PU-0001', '2024-02-30', 10), ('PU-0001', '2024-01-01', 'ten')");
   }
-  RunSummary review(std::int64_t split_min_rows) {
+  app::RunSummary review(std::int64_t split_min_rows) {
     Connection db = file.open();
-    ReviewOptions options;
+    app::ReviewOptions options;
     options.as_of = parse_iso_date("2026-11-30");
     options.split_min_rows = split_min_rows;
-    return run_review(db, options);
+    return app::run_review(db, options);
   }
   TempDatabase file;
 };
 
 TEST_F(DemoFleet, HalvesStoreExactlyWhatOnePassStores) {
-  const RunSummary one_pass = review(kOnePass);
-  const RunSummary halves = review(1);
+  const app::RunSummary one_pass = review(kOnePass);
+  const app::RunSummary halves = review(1);
   Connection db = file.open();
   const std::int64_t events = static_cast<std::int64_t>(scalar(db, "SELECT count(*) FROM cost_event"));
   // The rejected cost rows lie in both halves, numbered as one pass numbers them.

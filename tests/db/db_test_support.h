@@ -10,7 +10,7 @@
 #include <unistd.h>
 
 #include "db/connection.h"
-#include "db/sha256.h"
+#include "app/sha256.h"
 
 namespace tenure::testing_support {
 
@@ -59,7 +59,7 @@ inline std::string relation_digest(db::Connection& db, const std::string& relati
     }
     all += "\n";
   }
-  return db::sha256_hex(all);
+  return app::sha256_hex(all);
 }
 
 }  // namespace tenure::testing_support

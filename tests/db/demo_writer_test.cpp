@@ -12,7 +12,7 @@
 
 #include "core/errors.h"
 #include "db/policy_store.h"
-#include "db/review_run.h"
+#include "app/review_run.h"
 #include "db_test_support.h"
 #include "demo/demo_classes.h"
 #include "demo/demo_policy.h"
@@ -145,9 +145,9 @@ TEST(DemoWriter, TheReviewRejectsExactlyTheInjectedBadRows) {
   Connection db = file.open();
   const demo::Options options = small_fleet();
   const DemoWrite written = write_demo_fleet(db, options);
-  ReviewOptions review;
+  app::ReviewOptions review;
   review.as_of = options.as_of;
-  const RunSummary run = run_review(db, review);
+  const app::RunSummary run = app::run_review(db, review);
   EXPECT_EQ(run.rows_rejected, static_cast<std::int64_t>(written.summary.bad_rows.size()));
   for (const demo::BadRow& bad : written.summary.bad_rows) {
     SCOPED_TRACE(std::string(demo::name(bad.kind)) + ": " + bad.detail);

@@ -21,7 +21,7 @@
 #include <fmt/format.h>
 
 #include "db/demo_writer.h"
-#include "db/review_run.h"
+#include "app/review_run.h"
 #include "db_test_support.h"
 
 namespace tenure::db {
@@ -140,9 +140,9 @@ TEST_P(HostWritingThroughReviews, LosesNoWrite) {
   Connection db = file.open();
   std::vector<std::int64_t> rows_read;
   for (int i = 0; i < kReviews; ++i) {
-    ReviewOptions options{std::nullopt, parse_iso_date("2026-06-30"), {}, {}};
+    app::ReviewOptions options{std::nullopt, parse_iso_date("2026-06-30"), {}, {}};
     options.split_min_rows = 1;  // read the events in two halves where the journal mode allows
-    const RunSummary s = run_review(db, options);
+    const app::RunSummary s = app::run_review(db, options);
     rows_read.push_back(s.rows_read);
   }
   byte = 'X';

@@ -1,5 +1,5 @@
 // A review killed with SIGKILL at many points (SPEC 7: "a failed or interrupted run leaves the
-// previous results exactly as they were"). A child process runs db::run_review on a copy of an
+// previous results exactly as they were"). A child process runs app::run_review on a copy of an
 // invented demo database that already holds one completed run; the parent kills it after delays
 // spread from 0 to past the run's own duration, then checks the file: PRAGMA integrity_check is
 // ok, and either every table is exactly as before (killed before the commit) or the new run is
@@ -19,8 +19,8 @@
 #include <fmt/format.h>
 
 #include "db/demo_writer.h"
-#include "db/review_run.h"
-#include "db/sha256.h"
+#include "app/review_run.h"
+#include "app/sha256.h"
 #include "db_test_support.h"
 
 namespace tenure::db {
@@ -46,7 +46,7 @@ std::string rows_digest(Connection& db, const std::string& relation, bool is_vie
     }
     all += '\n';
   }
-  return sha256_hex(all);
+  return app::sha256_hex(all);
 }
 
 // The schema and every tenure_ table: all a review writes (input tables are never written,
@@ -56,7 +56,7 @@ std::string database_digest(Connection& db) {
   Statement tables(db, "SELECT name FROM sqlite_schema WHERE type = 'table' AND name LIKE "
                        "'tenure_%' ORDER BY name");
   while (tables.step()) all += rows_digest(db, std::string(tables.text(0)), false);
-  return sha256_hex(all);
+  return app::sha256_hex(all);
 }
 
 // What a completed second run shows: the two latest views, its rejected rows and the runs'
@@ -69,7 +69,7 @@ std::string completed_run_digest(Connection& db) {
   while (run.step()) {
     for (int c = 0; c < 6; ++c) all.append(run.text(c)).append("|");
   }
-  return sha256_hex(all);
+  return app::sha256_hex(all);
 }
 
 void copy_database(const std::string& from, const std::string& to) {
@@ -90,7 +90,7 @@ class KilledReview : public ::testing::Test {
       options.seed = 7;
       options.as_of = *parse_iso_date(kSecondAsOf);
       write_demo_fleet(db, options);
-      run_review(db, {std::nullopt, parse_iso_date(kFirstAsOf), {}, {}});
+      app::run_review(db, {std::nullopt, parse_iso_date(kFirstAsOf), {}, {}});
       before = new std::string(database_digest(db));
     }
     // The second run left to finish: what a run killed after its commit must equal.
@@ -111,7 +111,7 @@ class KilledReview : public ::testing::Test {
           return std::chrono::duration_cast<std::chrono::microseconds>(t).count();
         };
         std::int64_t write_starts = 0;
-        run_review(db, {std::nullopt, parse_iso_date(kSecondAsOf),
+        app::run_review(db, {std::nullopt, parse_iso_date(kSecondAsOf),
                         [&](std::size_t, std::size_t) {
                           if (write_starts == 0) write_starts = written();
                         },
@@ -154,9 +154,9 @@ class KilledReview : public ::testing::Test {
     if (child == 0) {
       try {
         Connection db = copy.open();
-        ReviewOptions options{std::nullopt, parse_iso_date(kSecondAsOf), {}, {}};
+        app::ReviewOptions options{std::nullopt, parse_iso_date(kSecondAsOf), {}, {}};
         if (in_hook) options.before_commit = [] { std::raise(SIGKILL); };
-        run_review(db, options);
+        app::run_review(db, options);
         _exit(0);
       } catch (...) {
         _exit(3);

@@ -10,8 +10,8 @@
 #include <fmt/format.h>
 
 #include "core/errors.h"
-#include "db/review_run.h"
-#include "db/sha256.h"
+#include "app/review_run.h"
+#include "app/sha256.h"
 #include "db_test_support.h"
 #include "fixtures/fleets/fixture_fleets.h"
 
@@ -37,7 +37,7 @@ std::string database_digest(Connection& db) {
       all += '\n';
     }
   }
-  return sha256_hex(all);
+  return app::sha256_hex(all);
 }
 
 class RefusingStorage : public ::testing::Test {
@@ -47,13 +47,13 @@ class RefusingStorage : public ::testing::Test {
     fixtures::create_input_tables(db.handle());
     fixtures::add_noiseless_fleet(db.handle());
   }
-  ReviewOptions second_run() const {
+  app::ReviewOptions second_run() const {
     return {fixtures::noiseless_policy(), parse_iso_date("2026-12-31"), {}, {}};
   }
   // Runs a first, complete review (the "previous results").
   void first_review() {
     Connection db = file.open();
-    run_review(db, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
+    app::run_review(db, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
   }
   std::string digest() {
     Connection db = file.open();
@@ -64,9 +64,9 @@ class RefusingStorage : public ::testing::Test {
 };
 
 // The error a review on `db` throws, as its message; fails the test on any other outcome.
-std::string runtime_failure_of(Connection& db, const ReviewOptions& options) {
+std::string runtime_failure_of(Connection& db, const app::ReviewOptions& options) {
   try {
-    run_review(db, options);
+    app::run_review(db, options);
   } catch (const RuntimeFailure& e) {
     return e.what();
   } catch (const std::exception& e) {
@@ -107,7 +107,7 @@ TEST_F(RefusingStorage, FullDiskAfterAFirstRunLeavesItsResults) {
   }
   // With room again, the same review succeeds on the same file.
   Connection db = file.open();
-  const RunSummary s = run_review(db, second_run());
+  const app::RunSummary s = app::run_review(db, second_run());
   EXPECT_EQ(s.run_id, 2);
   EXPECT_EQ(text_of(db, "SELECT as_of FROM tenure_run JOIN tenure_latest USING (run_id) LIMIT 1"),
             "2026-12-31");

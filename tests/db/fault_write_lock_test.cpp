@@ -13,7 +13,7 @@
 
 #include <fmt/format.h>
 
-#include "db/review_run.h"
+#include "app/review_run.h"
 #include "db_test_support.h"
 #include "fixtures/fleets/fixture_fleets.h"
 
@@ -61,7 +61,7 @@ TEST_P(HeldWriteLock, ReviewWaitsForTheHostAndSucceeds) {
   ASSERT_EQ(read(locked[0], &ready, 1), 1);  // the host holds the lock from here
   const auto start = std::chrono::steady_clock::now();
   Connection db = file.open();
-  const RunSummary s = run_review(db, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
+  const app::RunSummary s = app::run_review(db, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
   const auto waited = std::chrono::steady_clock::now() - start;
   int status = 0;
   waitpid(host, &status, 0);

@@ -1,5 +1,5 @@
 // The bad-input catalogue (issue "hardening"): every kind of odd or hostile value a maintenance
-// database can hold, each fed through db::run_review on an invented fixture fleet. Each ends in a
+// database can hold, each fed through app::run_review on an invented fixture fleet. Each ends in a
 // rejected row with its reason, or a clear error, and never in a crash or in a NaN or an infinity
 // in the results (every REAL column of every tenure_ table and view is checked).
 // bad_rows_test.cpp has one row of each rejection reason; this file has the odd values.
@@ -12,7 +12,7 @@
 #include <fmt/format.h>
 
 #include "core/errors.h"
-#include "db/review_run.h"
+#include "app/review_run.h"
 #include "db/row_checks.h"
 #include "db_test_support.h"
 #include "fixtures/fleets/fixture_fleets.h"
@@ -46,9 +46,9 @@ class InputCatalogue : public ::testing::Test {
     fixtures::add_noiseless_fleet(db.handle());
   }
 
-  RunSummary review(const std::string& as_of = fixtures::kAsOf) {
+  app::RunSummary review(const std::string& as_of = fixtures::kAsOf) {
     Connection db = file.open();
-    return run_review(db, {catalogue_policy(), parse_iso_date(as_of), {}, {}});
+    return app::run_review(db, {catalogue_policy(), parse_iso_date(as_of), {}, {}});
   }
 
   // Runs a statement with one bound double (for NaN, which SQL text cannot spell).
@@ -60,7 +60,7 @@ class InputCatalogue : public ::testing::Test {
   }
 
   // The reasons tenure_rejected holds for rows whose row_ref contains `ref`.
-  std::vector<std::string> reasons(const RunSummary& s, const std::string& source,
+  std::vector<std::string> reasons(const app::RunSummary& s, const std::string& source,
                                    const std::string& ref) {
     Connection db = file.open();
     Statement q(db, "SELECT reason FROM tenure_rejected WHERE run_id = ?1 AND source = ?2 AND "
@@ -129,7 +129,7 @@ TEST_F(InputCatalogue, TextInNumberColumns) {
           "INSERT INTO cost_event VALUES ('T-2', '2021-03-02', '', 'repair');"
           "INSERT INTO cost_event VALUES ('T-2', '2021-03-03', '  250  ', 'repair');"
           "INSERT INTO asset_valuation VALUES ('T-2', '2022-01-15', 'about 5000', 'x');");
-  const RunSummary s = review();
+  const app::RunSummary s = review();
   EXPECT_EQ(reasons(s, "asset", "'T-1'"),
             std::vector<std::string>{"first_cost 'nine thousand' is not a number"});
   EXPECT_EQ(reasons(s, "asset", "'T-2'"), std::vector<std::string>{});  // '9000' became 9000.0
@@ -155,7 +155,7 @@ TEST_F(InputCatalogue, NaNArrivesAsMissing) {
   insert_with_number("INSERT INTO cost_event VALUES ('PF-010', '2025-01-02', ?1, 'repair')", nan);
   insert_with_number("INSERT INTO asset_valuation VALUES ('PF-010', '2025-01-02', ?1, 'x')", nan);
   EXPECT_EQ(count("SELECT count(*) FROM asset WHERE asset_id = 'N-1' AND first_cost IS NULL"), 1);
-  const RunSummary s = review();
+  const app::RunSummary s = review();
   EXPECT_EQ(reasons(s, "asset", "'N-1'"), std::vector<std::string>{"first_cost is missing"});
   EXPECT_EQ(reasons(s, "cost_event", "occurred_on '2025-01-02'"),
             std::vector<std::string>{"amount is missing"});
@@ -173,7 +173,7 @@ TEST_F(InputCatalogue, InfinitiesAreRejected) {
   db.exec("INSERT INTO cost_event VALUES ('PF-010', '2025-01-03', 1e999, 'repair');"
           "INSERT INTO asset_valuation VALUES ('PF-010', '2025-01-03', 1e999, 'x');"
           "INSERT INTO asset_valuation VALUES ('PF-010', '2025-01-04', -1e999, 'x');");
-  const RunSummary s = review();
+  const app::RunSummary s = review();
   EXPECT_EQ(reasons(s, "asset", "'I-1'"), std::vector<std::string>{"first_cost is not a finite number"});
   EXPECT_EQ(reasons(s, "cost_event", "occurred_on '2025-01-03'"),
             std::vector<std::string>{"amount is not a finite number"});
@@ -196,7 +196,7 @@ TEST_F(InputCatalogue, HugeFiniteAmountsAreRejectedBeyondTheBound) {
           "INSERT INTO cost_event VALUES ('PF-010', '2025-01-06', 1e308, 'repair');"
           "INSERT INTO cost_event VALUES ('PF-010', '2025-01-07', -1e308, 'credit');"
           "INSERT INTO asset_valuation VALUES ('PF-009', '2025-01-05', 1e308, 'x');");
-  const RunSummary s = review();
+  const app::RunSummary s = review();
   EXPECT_EQ(reasons(s, "asset", "'H-1'"),
             std::vector<std::string>{"first_cost 1e+308 is larger in magnitude than 1e+15"});
   EXPECT_EQ(reasons(s, "asset", "'H-2'"),
@@ -223,7 +223,7 @@ TEST_F(InputCatalogue, AmountsAtTheBoundAreKeptAndStayFinite) {
           "INSERT INTO cost_event VALUES ('B-1', '2020-09-01', 1e15, 'repair');"
           "INSERT INTO cost_event VALUES ('B-1', '2021-09-01', 1e15, 'repair');"
           "INSERT INTO asset_valuation VALUES ('B-1', '2021-03-01', 1e15, 'x');");
-  const RunSummary s = review();
+  const app::RunSummary s = review();
   EXPECT_EQ(s.rows_rejected, 0);
   EXPECT_EQ(count("SELECT count(*) FROM tenure_latest WHERE asset_id = 'B-1'"), 1);
   expect_only_finite_numbers();
@@ -246,7 +246,7 @@ TEST_F(InputCatalogue, NegativeAndZeroAmounts) {
   db.exec("INSERT INTO cost_event VALUES ('HO-1', '2024-10-01', -400, 'warranty credit');"
           "INSERT INTO cost_event VALUES ('HO-1', '2024-10-02', 0, 'inspection');"
           "INSERT INTO asset_valuation VALUES ('HO-2', '2026-03-01', 0, 'scrap');");
-  const RunSummary s = review();
+  const app::RunSummary s = review();
   EXPECT_EQ(reasons(s, "asset", "'Z-0'"), std::vector<std::string>{"first_cost 0 must be greater than 0"});
   EXPECT_EQ(reasons(s, "asset", "'Z-1'"), std::vector<std::string>{"first_cost -1 must be greater than 0"});
   EXPECT_EQ(s.rows_rejected, 2);
@@ -272,7 +272,7 @@ TEST_F(InputCatalogue, DatesOutOfRange) {
   }
   // A date stored as a number (days or a Julian day) is not a date either.
   db.exec("INSERT INTO asset VALUES ('D-NUM', 'pump-fixture', 2459000.5, 9000, NULL)");
-  const RunSummary s = review();
+  const app::RunSummary s = review();
   i = 0;
   for (const char* date : dates) {
     ++i;
@@ -306,7 +306,7 @@ TEST_F(InputCatalogue, PreNineteenHundredAndFarFutureDates) {
           "INSERT INTO asset VALUES ('FUT-9999', 'pump-fixture', '9999-12-31', 9000, NULL);"
           "INSERT INTO cost_event VALUES ('PF-010', '9999-12-31', 10, 'repair');"
           "INSERT INTO asset_valuation VALUES ('PF-010', '9999-12-31', 10, 'x');");
-  const RunSummary s = review();
+  const app::RunSummary s = review();
   EXPECT_EQ(s.rows_rejected, 0);
   EXPECT_EQ(s.rows_after_as_of, after_as_of + 2);
   EXPECT_EQ(count("SELECT age_years FROM tenure_latest WHERE asset_id = 'OLD-1850'"), 176);
@@ -323,11 +323,11 @@ TEST_F(InputCatalogue, PreNineteenHundredAndFarFutureDates) {
 // A review as of the last day the calendar allows (every asset is then thousands of years old,
 // its future years past 9999) and as of the first (no asset is in service yet).
 TEST_F(InputCatalogue, AsOfDatesAtTheEndsOfTheCalendar) {
-  const RunSummary last = review("9999-12-31");
+  const app::RunSummary last = review("9999-12-31");
   EXPECT_EQ(last.assets_reviewed, 30);
   EXPECT_EQ(last.due, 30);
   expect_only_finite_numbers();
-  const RunSummary first = review("1400-01-01");
+  const app::RunSummary first = review("1400-01-01");
   EXPECT_EQ(first.assets_reviewed, 0);
   EXPECT_EQ(count(fmt::format("SELECT assets_not_yet_in_service FROM tenure_run WHERE run_id = {}",
                               first.run_id)),
@@ -342,10 +342,10 @@ TEST_F(InputCatalogue, EscalationToAFarFutureAsOfIsRefusedAndWritesNothing) {
   std::string policy = catalogue_policy();
   policy.insert(policy.find("\"classes\""), "\"cost_escalation\": 0.2, ");
   Connection db = file.open();
-  EXPECT_THROW(run_review(db, {policy, parse_iso_date("9999-12-31"), {}, {}}), InputError);
+  EXPECT_THROW(app::run_review(db, {policy, parse_iso_date("9999-12-31"), {}, {}}), InputError);
   EXPECT_EQ(scalar(db, "SELECT count(*) FROM sqlite_schema WHERE name LIKE 'tenure_%'"), 0);
   // The same escalation to an ordinary as-of date is fine.
-  run_review(db, {policy, parse_iso_date(fixtures::kAsOf), {}, {}});
+  app::run_review(db, {policy, parse_iso_date(fixtures::kAsOf), {}, {}});
   expect_only_finite_numbers();
 }
 
@@ -374,7 +374,7 @@ TEST_F(InputCatalogue, LongNonUtf8AndSqlLookingIds) {
   }
   const double assets_before = count("SELECT count(*) FROM asset");
   const double costs_before = count("SELECT count(*) FROM cost_event");
-  const RunSummary s = review();
+  const app::RunSummary s = review();
   const std::string shown_long = "'" + std::string(64, 'L') + "...'";
   EXPECT_EQ(reasons(s, "asset", shown_long), std::vector<std::string>{"asset_id is longer than 256 bytes"});
   EXPECT_EQ(reasons(s, "cost_event", shown_long),
@@ -423,7 +423,7 @@ TEST(InputCatalogueEmpty, EmptyFleetRunsWithZeroAssets) {
   TempDatabase file;
   Connection db = file.open();
   fixtures::create_input_tables(db.handle());
-  const RunSummary s = run_review(db, {catalogue_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
+  const app::RunSummary s = app::run_review(db, {catalogue_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
   EXPECT_EQ(s.assets_reviewed, 0);
   EXPECT_EQ(s.rows_read, 0);
   EXPECT_EQ(s.rows_rejected, 0);
@@ -439,7 +439,7 @@ TEST_F(InputCatalogue, ClassWithOneAssetYear) {
   Connection db = file.open();
   db.exec("INSERT INTO asset VALUES ('HO-ONE', 'hoist-fixture', '2025-01-10', 9000, NULL);"
           "INSERT INTO cost_event VALUES ('HO-ONE', '2025-05-01', 800, 'repair');");
-  const RunSummary s = review();
+  const app::RunSummary s = review();
   EXPECT_EQ(s.rows_rejected, 0);
   EXPECT_EQ(count("SELECT asset_years FROM tenure_class_latest WHERE asset_class = 'hoist-fixture'"), 1);
   EXPECT_EQ(count("SELECT count(*) FROM tenure_latest WHERE asset_id = 'HO-ONE'"), 1);
@@ -453,7 +453,7 @@ TEST_F(InputCatalogue, ClassWithNoCostHistory) {
   db.exec("INSERT INTO asset VALUES ('HO-NEW-1', 'hoist-fixture', '2025-09-10', 9000, NULL);"
           "INSERT INTO asset VALUES ('HO-NEW-2', 'hoist-fixture', '2026-01-10', 9500, NULL);"
           "INSERT INTO cost_event VALUES ('HO-NEW-1', '2026-05-01', 300, 'repair');");
-  const RunSummary s = review();
+  const app::RunSummary s = review();
   EXPECT_EQ(s.rows_rejected, 0);
   EXPECT_EQ(count("SELECT count(*) FROM tenure_class_latest WHERE asset_class = 'hoist-fixture' "
                   "AND cost_model IS NULL AND asset_years = 0 AND euac_before_tax IS NULL"),
@@ -476,7 +476,7 @@ TEST_F(InputCatalogue, ClassWithNoCostHistory) {
 TEST_F(InputCatalogue, ClassWithYearsButNoEvents) {
   Connection db = file.open();
   db.exec("INSERT INTO asset VALUES ('HO-IDLE', 'hoist-fixture', '2018-01-10', 9000, NULL);");
-  const RunSummary s = review();
+  const app::RunSummary s = review();
   EXPECT_EQ(s.rows_rejected, 0);
   EXPECT_EQ(count("SELECT cost_a FROM tenure_class_latest WHERE asset_class = 'hoist-fixture'"), 0);
   EXPECT_EQ(count("SELECT cost_g FROM tenure_class_latest WHERE asset_class = 'hoist-fixture'"), 0);
@@ -497,7 +497,7 @@ TEST_F(InputCatalogue, AssetsOlderThanMaxLife) {
                           year, fixtures::noiseless_cost(year - 2005)));
     }
   }
-  const RunSummary s = review();
+  const app::RunSummary s = review();
   EXPECT_EQ(s.rows_rejected, 0);
   EXPECT_EQ(count("SELECT age_years FROM tenure_latest WHERE asset_id = 'AGED-40'"), 40);
   EXPECT_EQ(count("SELECT count(*) FROM tenure_due WHERE asset_id IN ('AGED-20', 'AGED-40')"), 2);

@@ -11,7 +11,7 @@
 #include <fmt/format.h>
 
 #include "core/errors.h"
-#include "db/review_run.h"
+#include "app/review_run.h"
 #include "db_test_support.h"
 #include "fixtures/fleets/fixture_fleets.h"
 #include "formats/case_json.h"
@@ -35,9 +35,9 @@ class NoiselessFleet : public ::testing::TestWithParam<double> {
     fixtures::create_input_tables(db.handle());
     fixtures::add_noiseless_fleet(db.handle());
   }
-  RunSummary review(const char* as_of = fixtures::kAsOf) {
+  app::RunSummary review(const char* as_of = fixtures::kAsOf) {
     Connection db = file.open();
-    return run_review(db, {fixtures::noiseless_policy(GetParam()), parse_iso_date(as_of), {}, {}});
+    return app::run_review(db, {fixtures::noiseless_policy(GetParam()), parse_iso_date(as_of), {}, {}});
   }
   TempDatabase file;
 };
@@ -135,9 +135,9 @@ TEST_P(NoiselessFleet, InputTablesAreNeverWritten) {
 }
 
 TEST_P(NoiselessFleet, NewlyDueComparesWithThePreviousRun) {
-  const RunSummary first = review("2024-06-30");
+  const app::RunSummary first = review("2024-06-30");
   EXPECT_EQ(first.newly_due, first.due);  // no earlier run: everything due is new
-  const RunSummary second = review();
+  const app::RunSummary second = review();
   Connection db = file.open();
   // Due now and not due at the first run, counted independently of the view.
   const double expected = scalar(db, fmt::format(
@@ -152,12 +152,12 @@ TEST_P(NoiselessFleet, NewlyDueComparesWithThePreviousRun) {
 }
 
 TEST_P(NoiselessFleet, KilledBeforeCommitLeavesThePreviousResults) {
-  const RunSummary first = review();
+  const app::RunSummary first = review();
   const pid_t child = fork();
   ASSERT_GE(child, 0);
   if (child == 0) {
     Connection db = file.open();
-    run_review(db, {fixtures::noiseless_policy(GetParam()), parse_iso_date("2026-12-31"), {},
+    app::run_review(db, {fixtures::noiseless_policy(GetParam()), parse_iso_date("2026-12-31"), {},
                     [] { std::raise(SIGKILL); }});
     _exit(0);
   }
@@ -179,7 +179,7 @@ TEST(ReviewRun, MissingRelationIsNamedAndNothingIsWritten) {
   fixtures::create_input_tables(db.handle());
   db.exec("DROP TABLE asset_valuation");
   try {
-    run_review(db, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
+    app::run_review(db, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
     FAIL() << "expected an InputError";
   } catch (const InputError& e) {
     EXPECT_EQ(e.where(), "$.sources.valuations");
@@ -194,7 +194,7 @@ TEST(ReviewRun, MissingColumnIsNamed) {
   fixtures::create_input_tables(db.handle());
   db.exec("DROP TABLE cost_event; CREATE TABLE cost_event(asset_id TEXT, occurred_on TEXT, cost REAL)");
   try {
-    run_review(db, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
+    app::run_review(db, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
     FAIL() << "expected an InputError";
   } catch (const InputError& e) {
     EXPECT_EQ(std::string(e.what()), "$.sources.costs: relation 'cost_event' has no column 'amount'");

@@ -8,7 +8,7 @@
 #include <fmt/format.h>
 
 #include "core/errors.h"
-#include "db/review_run.h"
+#include "app/review_run.h"
 #include "db/run_reader.h"
 #include "db_test_support.h"
 #include "explain/explanation.h"
@@ -29,9 +29,9 @@ class RunReader : public ::testing::Test {
     fixtures::create_input_tables(db.handle());
     fixtures::add_noiseless_fleet(db.handle());
   }
-  RunSummary review(const std::string& policy, const char* as_of = fixtures::kAsOf) {
+  app::RunSummary review(const std::string& policy, const char* as_of = fixtures::kAsOf) {
     Connection db = file.open();
-    return run_review(db, {policy, parse_iso_date(as_of), {}, {}});
+    return app::run_review(db, {policy, parse_iso_date(as_of), {}, {}});
   }
   TempDatabase file;
 };
@@ -48,14 +48,14 @@ TEST_F(RunReader, DatabaseWithoutRunsIsNamed) {
 
 TEST_F(RunReader, ReadsTheLatestOrTheNamedRun) {
   review(fixtures::noiseless_policy(), "2025-06-30");
-  const RunSummary second = review(fixtures::noiseless_policy());
+  const app::RunSummary second = review(fixtures::noiseless_policy());
   Connection db = file.open();
-  const explain::StoredRun latest = read_run(db, std::nullopt);
+  const results::RunRow latest = read_run(db, std::nullopt);
   EXPECT_EQ(latest.run_id, second.run_id);
   EXPECT_EQ(latest.as_of, fixtures::kAsOf);
   EXPECT_EQ(latest.policy_json, fixtures::noiseless_policy());
-  EXPECT_EQ(latest.basis, "after_tax");
-  EXPECT_EQ(latest.money, "nominal");
+  EXPECT_EQ(latest.basis, replacement::Basis::after_tax);
+  EXPECT_EQ(latest.money, results::MoneyTerms::nominal);
   EXPECT_EQ(read_run(db, 1).as_of, "2025-06-30");
   try {
     read_run(db, 99);
@@ -66,29 +66,29 @@ TEST_F(RunReader, ReadsTheLatestOrTheNamedRun) {
 }
 
 TEST_F(RunReader, AssetAndClassRowsAreTheViewsRows) {
-  const RunSummary run = review(fixtures::noiseless_policy());
+  const app::RunSummary run = review(fixtures::noiseless_policy());
   Connection db = file.open();
   const auto asset = read_asset_result(db, run.run_id, "PF-010");
   ASSERT_TRUE(asset);
   EXPECT_EQ(asset->asset_class, "pump-fixture");
   EXPECT_EQ(asset->defender_euac, scalar(db, "SELECT defender_euac FROM tenure_latest WHERE asset_id = 'PF-010'"));
-  EXPECT_EQ(asset->verdict, text_of(db, "SELECT verdict FROM tenure_latest WHERE asset_id = 'PF-010'"));
+  EXPECT_EQ(review::to_string(asset->verdict), text_of(db, "SELECT verdict FROM tenure_latest WHERE asset_id = 'PF-010'"));
   EXPECT_EQ(asset->reason, text_of(db, "SELECT reason FROM tenure_latest WHERE asset_id = 'PF-010'"));
   EXPECT_FALSE(read_asset_result(db, run.run_id, "PF-010' OR '1'='1"));
   EXPECT_EQ(read_asset_results(db, run.run_id).size(),
             static_cast<std::size_t>(scalar(db, "SELECT count(*) FROM tenure_latest")));
   const auto classes = read_class_results(db, run.run_id);
   ASSERT_EQ(classes.size(), 1u);
-  EXPECT_EQ(classes[0].cost_model, "linear");
+  EXPECT_EQ(classes[0].cost_model, fleet::CostModel::linear);
   EXPECT_EQ(classes[0].cost_a, scalar(db, "SELECT cost_a FROM tenure_class_latest"));
-  EXPECT_EQ(classes[0].value_model, "fitted");
+  EXPECT_EQ(classes[0].value_model, fleet::ValueModel::fitted);
   EXPECT_FALSE(read_class_result(db, run.run_id, "no-such-class"));
   // Twelve years on each basis (max_life_years 12, taxed).
   const auto curves = read_challenger_curves(db, run.run_id);
   ASSERT_EQ(curves.size(), 24u);
-  EXPECT_EQ(curves.front().basis, "after_tax");
+  EXPECT_EQ(curves.front().basis, replacement::Basis::after_tax);
   EXPECT_EQ(curves.front().years, 1);
-  EXPECT_EQ(curves.back().basis, "before_tax");
+  EXPECT_EQ(curves.back().basis, replacement::Basis::before_tax);
   EXPECT_EQ(curves.back().years, 12);
 }
 
@@ -98,8 +98,8 @@ TEST_F(RunReader, RejectedRowsAndThePreviousRunsDueAssets) {
     db.exec("INSERT INTO cost_event VALUES ('PF-001', '2026-13-01', 10, 'repair'),"
             " ('PF-404', '2026-01-01', 10, 'repair'), ('PF-002', '2026-01-01', 'n/a', 'repair')");
   }
-  const RunSummary first = review(fixtures::noiseless_policy(), "2024-06-30");
-  const RunSummary second = review(fixtures::noiseless_policy());
+  const app::RunSummary first = review(fixtures::noiseless_policy(), "2024-06-30");
+  const app::RunSummary second = review(fixtures::noiseless_policy());
   Connection db = file.open();
   EXPECT_EQ(read_rejected(db, second.run_id, 100).size(), 3u);
   const auto two = read_rejected(db, second.run_id, 2);
@@ -133,16 +133,16 @@ class EveryAsset : public RunReader, public ::testing::WithParamInterface<const 
 TEST_P(EveryAsset, IsExplainedWithItsStoredFiguresReproduced) {
   std::string policy = fixtures::noiseless_policy();
   policy.replace(policy.find("\"detail\": \"all\""), 15, fmt::format("\"detail\": \"{}\"", GetParam()));
-  const RunSummary run = review(policy);
+  const app::RunSummary run = review(policy);
   Connection db = file.open();
-  const explain::StoredRun stored_run = read_run(db, std::nullopt);
+  const results::RunRow stored_run = read_run(db, std::nullopt);
   const auto stored_class = read_class_result(db, run.run_id, "pump-fixture");
   ASSERT_TRUE(stored_class);
   std::size_t explained = 0;
-  for (const explain::StoredAsset& asset : read_asset_results(db, run.run_id)) {
+  for (const results::AssetRow& asset : read_asset_results(db, run.run_id)) {
     SCOPED_TRACE(asset.asset_id);
     const explain::Explanation e = explain::explain_asset(
-        stored_run, *stored_class, asset, read_input_asset(db, review::Sources{}, asset.asset_id));
+        stored_run, explain::run_policy(stored_run), *stored_class, asset, read_input_asset(db, review::Sources{}, asset.asset_id));
     EXPECT_TRUE(e.reproduced()) << ::testing::PrintToString(e.differences);
     ASSERT_TRUE(e.own);
     EXPECT_EQ(e.own->credibility.years, asset.cost_years);

@@ -4,7 +4,7 @@
 #include <gtest/gtest.h>
 
 #include "core/errors.h"
-#include "db/review_run.h"
+#include "app/review_run.h"
 #include "db_test_support.h"
 #include "fixtures/fleets/fixture_fleets.h"
 
@@ -63,8 +63,8 @@ TEST(Sources, ViewsOverAnotherSchemaGiveTheSameResults) {
   }
   Connection a = plain.open();
   Connection b = mapped.open();
-  run_review(a, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
-  run_review(b, {mapped_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
+  app::run_review(a, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
+  app::run_review(b, {mapped_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
   const auto rows = latest_rows(a);
   EXPECT_EQ(rows.size(), 30u);
   EXPECT_EQ(rows, latest_rows(b));
@@ -78,7 +78,7 @@ TEST(Sources, NamesThatAreNotPlainIdentifiersAreRefused) {
   policy.insert(policy.find("\"classes\""),
                 R"("sources": {"costs": "cost_event; DROP TABLE asset"},)");
   try {
-    run_review(db, {policy, parse_iso_date(fixtures::kAsOf), {}, {}});
+    app::run_review(db, {policy, parse_iso_date(fixtures::kAsOf), {}, {}});
     FAIL() << "expected an InputError";
   } catch (const InputError& e) {
     EXPECT_EQ(e.where(), "$.sources.costs");

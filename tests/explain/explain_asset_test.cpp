@@ -24,11 +24,11 @@ class ExplainAsset : public ::testing::TestWithParam<std::tuple<int, double>> {}
 TEST_P(ExplainAsset, ReproducesTheCaseAnalysisExactly) {
   const auto [age, tax] = GetParam();
   PumpFixture f(age, tax);
-  const Explanation e = explain_asset(f.run, f.stored_class, f.stored, std::nullopt);
+  const Explanation e = explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt);
   // Everything but the review's wording of the reason (left empty in the fixture) agrees.
   ASSERT_EQ(e.differences.size(), 1u) << ::testing::PrintToString(e.differences);
   EXPECT_EQ(e.differences[0].rfind("reason: stored , recomputed ", 0), 0u) << e.differences[0];
-  EXPECT_EQ(review::to_string(e.review.verdict), f.stored.verdict);
+  EXPECT_EQ(e.review.finding.verdict, f.stored.verdict);
   // The recomputed tables are the case analysis's, bit for bit.
   const replacement::CaseResult& r = *f.result;
   EXPECT_EQ(e.review.defender->before_tax.curve.euac, r.defender->before_tax.curve.euac);
@@ -40,8 +40,8 @@ TEST_P(ExplainAsset, ReproducesTheCaseAnalysisExactly) {
     EXPECT_EQ(e.review.defender->after_tax->curve.euac, r.defender->after_tax->curve.euac);
   }
   // With the review's reason stored, nothing differs.
-  f.stored.reason = e.review.reason;
-  EXPECT_TRUE(explain_asset(f.run, f.stored_class, f.stored, std::nullopt).reproduced());
+  f.stored.reason = e.review.finding.reason;
+  EXPECT_TRUE(explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt).reproduced());
 }
 
 INSTANTIATE_TEST_SUITE_P(AgesAndTaxes, ExplainAsset,
@@ -49,17 +49,18 @@ INSTANTIATE_TEST_SUITE_P(AgesAndTaxes, ExplainAsset,
                                             ::testing::Values(0.0, 0.25)));
 
 TEST(ExplainAsset, FixtureCoversEveryVerdict) {
-  std::set<std::string> seen;
+  std::set<review::Verdict> seen;
   for (int age = 0; age <= 14; ++age) seen.insert(PumpFixture(age).stored.verdict);
-  EXPECT_EQ(seen, (std::set<std::string>{"keep", "review", "replace"}));
+  EXPECT_EQ(seen, (std::set<review::Verdict>{review::Verdict::keep, review::Verdict::review,
+                                             review::Verdict::replace}));
 }
 
 TEST(ExplainAsset, NamesAStoredFigureOffByOneUnitInTheLastPlace) {
   PumpFixture f(5);
-  f.stored.reason = explain_asset(f.run, f.stored_class, f.stored, std::nullopt).review.reason;
+  f.stored.reason = explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt).review.finding.reason;
   const double stored = *f.stored.defender_euac;
   f.stored.defender_euac = std::nextafter(stored, 1e300);
-  const Explanation e = explain_asset(f.run, f.stored_class, f.stored, std::nullopt);
+  const Explanation e = explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt);
   ASSERT_EQ(e.differences.size(), 1u);
   EXPECT_EQ(e.differences[0], fmt::format("defender_euac: stored {:.17g}, recomputed {:.17g}",
                                           *f.stored.defender_euac, stored));
@@ -68,10 +69,10 @@ TEST(ExplainAsset, NamesAStoredFigureOffByOneUnitInTheLastPlace) {
 
 TEST(ExplainAsset, NamesAChangedVerdictAndKStar) {
   PumpFixture f(9);
-  f.stored.reason = explain_asset(f.run, f.stored_class, f.stored, std::nullopt).review.reason;
-  f.stored.verdict = "keep";
+  f.stored.reason = explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt).review.finding.reason;
+  f.stored.verdict = review::Verdict::keep;
   f.stored.replace_after_years = *f.stored.replace_after_years + 1;
-  const Explanation e = explain_asset(f.run, f.stored_class, f.stored, std::nullopt);
+  const Explanation e = explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt);
   ASSERT_EQ(e.differences.size(), 2u);
   EXPECT_EQ(e.differences[0].rfind("replace_after_years: stored ", 0), 0u);
   EXPECT_EQ(e.differences[1].rfind("verdict: stored keep, recomputed ", 0), 0u);
@@ -90,25 +91,25 @@ TEST(ExplainAsset, ClassWithoutCostCurveIsUnderReviewWithItsNote) {
   f.stored.class_esl_years.reset();
   f.stored.defender_best_years.reset();
   f.stored.replace_after_years.reset();
-  f.stored.verdict = "review";
-  const Explanation e = explain_asset(f.run, f.stored_class, f.stored, std::nullopt);
+  f.stored.verdict = review::Verdict::review;
+  const Explanation e = explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt);
   EXPECT_FALSE(e.review.defender);
-  EXPECT_EQ(e.review.verdict, review::Verdict::review);
-  EXPECT_NE(e.review.reason.find("no complete year of cost history"), std::string::npos);
+  EXPECT_EQ(e.review.finding.verdict, review::Verdict::review);
+  EXPECT_NE(e.review.finding.reason.find("no complete year of cost history"), std::string::npos);
   ASSERT_EQ(e.differences.size(), 1u);  // only the empty stored reason
 }
 
 TEST(ExplainAsset, UnknownClassInThePolicyIsAFailure) {
   PumpFixture f(5);
   f.stored_class.asset_class = "not-in-policy";
-  EXPECT_THROW(explain_asset(f.run, f.stored_class, f.stored, std::nullopt), RuntimeFailure);
+  EXPECT_THROW(explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt), RuntimeFailure);
 }
 
 TEST(ExplainAsset, UnreadableStoredPolicyNamesIt) {
   PumpFixture f(5);
   f.run.policy_json = "{\"marr\": }";
   try {
-    explain_asset(f.run, f.stored_class, f.stored, std::nullopt);
+    run_policy(f.run);
     FAIL() << "expected an InputError";
   } catch (const InputError& e) {
     EXPECT_EQ(e.where(), "policy_json");

@@ -20,8 +20,8 @@ using testing::PumpFixture;
 
 Explanation reproduced_explanation(int age, double tax = 0.25) {
   PumpFixture f(age, tax);
-  f.stored.reason = explain_asset(f.run, f.stored_class, f.stored, std::nullopt).review.reason;
-  Explanation e = explain_asset(f.run, f.stored_class, f.stored, std::nullopt);
+  f.stored.reason = explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt).review.finding.reason;
+  Explanation e = explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt);
   EXPECT_TRUE(e.reproduced());
   return e;
 }
@@ -43,7 +43,7 @@ TEST(ExplainText, HasEverySectionTheVerdictAndTheCaution) {
   EXPECT_NE(text.find("money                    nominal"), std::string::npos);
   EXPECT_NE(text.find("linear: cost of age-year k = a + g (k - 1), a = 1,000.00, g = 400.00"),
             std::string::npos);
-  EXPECT_NE(text.find(e.review.reason), std::string::npos);
+  EXPECT_NE(text.find(e.review.finding.reason), std::string::npos);
   EXPECT_EQ(text.substr(text.size() - formats::kCaution.size() - 1),
             std::string(formats::kCaution) + "\n");
 }
@@ -51,7 +51,7 @@ TEST(ExplainText, HasEverySectionTheVerdictAndTheCaution) {
 TEST(ExplainText, SaysLoudlyWhenAFigureIsNotReproduced) {
   PumpFixture f(5);
   const std::string text =
-      explanation_to_text(explain_asset(f.run, f.stored_class, f.stored, std::nullopt));
+      explanation_to_text(explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt));
   EXPECT_NE(text.find("CHECK FAILED: stored figures differ from the recomputation:\n  reason: "),
             std::string::npos);
 }
@@ -80,7 +80,7 @@ TEST(ExplainJson, HoldsTheTablesAndParses) {
   EXPECT_EQ(doc.at("challenger").at("before_tax").at("curve").size(), 12u);
   EXPECT_EQ(doc.at("timing").at("rows").size(), static_cast<std::size_t>(weighed + 1));
   EXPECT_EQ(doc.at("verdict").at("defender_euac"), *e.stored.defender_euac);
-  EXPECT_EQ(doc.at("verdict").at("verdict"), e.stored.verdict);
+  EXPECT_EQ(doc.at("verdict").at("verdict"), review::to_string(e.stored.verdict));
 }
 
 TEST(ExplainJson, EquivalentCaseAnalysesToTheSameFigures) {

@@ -11,7 +11,7 @@ namespace {
 const fleet::CostCurve kCurve{fleet::CostModel::linear, 1000, 400, 1, 100, 0, 10, false};
 
 TEST(OwnCosts, TotalsPerAgeYearAndTheCredibilityFactor) {
-  InputAsset asset;
+  results::InputAsset asset;
   asset.in_service_on = "2020-01-01";
   asset.first_cost = 16000;
   asset.events = {{"2020-03-01", 600},  {"2020-11-30", 500},   // age-year 1: 1100
@@ -44,7 +44,7 @@ TEST(OwnCosts, TotalsPerAgeYearAndTheCredibilityFactor) {
 }
 
 TEST(OwnCosts, NoCompleteYearMeansTheClassCurveAsIs) {
-  InputAsset asset;
+  results::InputAsset asset;
   asset.in_service_on = "2024-01-01";
   asset.first_cost = 16000;
   asset.events = {{"2024-02-01", 300}};
@@ -56,7 +56,7 @@ TEST(OwnCosts, NoCompleteYearMeansTheClassCurveAsIs) {
 }
 
 TEST(OwnCosts, AnInputRowWithABadDateGivesNothing) {
-  InputAsset asset;
+  results::InputAsset asset;
   asset.in_service_on = "2024/01/01";
   EXPECT_FALSE(own_costs(asset, *parse_iso_date("2024-06-30"), 0.0, kCurve));
   asset.in_service_on = "2024-01-01";

@@ -6,7 +6,7 @@
 //
 //   PumpFixture f(5);              // a 5-year-old pump
 //   f.stored.defender_euac;        // from the independent case analysis
-//   explain_asset(f.run, f.stored_class, f.stored, std::nullopt);
+//   explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt);
 #pragma once
 
 #include <algorithm>
@@ -15,8 +15,10 @@
 #include <string>
 
 #include "depreciation/method.h"
-#include "explain/stored_run.h"
+#include "explain/explanation.h"
 #include "replacement/case_analysis.h"
+#include "results/rows.h"
+#include "review/verdict_rule.h"
 
 namespace tenure::explain::testing {
 
@@ -44,20 +46,20 @@ struct PumpFixture {
     run.run_id = 7;
     run.as_of = "2026-06-30";
     run.policy_json = pump_policy(tax);
-    run.basis = tax > 0 ? "after_tax" : "before_tax";
-    run.money = "nominal";
+    run.basis = tax > 0 ? replacement::Basis::after_tax : replacement::Basis::before_tax;
+    run.money = results::MoneyTerms::nominal;
     run.tenure_version = "test";
 
     stored_class.asset_class = "pump-fixture";
     stored_class.assets = 30;
     stored_class.challenger_first_cost = kChallengerCost;
     stored_class.max_life_years = kMaxLife;
-    stored_class.cost_model = "linear";
+    stored_class.cost_model = fleet::CostModel::linear;
     stored_class.cost_a = kA;
     stored_class.cost_g = kG;
     stored_class.cost_r2 = 1.0;
     stored_class.asset_years = 120;
-    stored_class.value_model = "fitted";
+    stored_class.value_model = fleet::ValueModel::fitted;
     stored_class.value_start = kStart;
     stored_class.value_decline = kDecline;
     stored_class.valuations_used = 40;
@@ -101,21 +103,21 @@ struct PumpFixture {
     if (r.defender->after_tax) stored.defender_euac_after_tax = r.defender->after_tax->curve.best_euac;
     stored.marginal_cost_next_year = r.defender->on(r.basis).curve.marginal_costs[0];
     stored.replace_after_years = d.timing.keep_years;
-    // SPEC 6 "Nightly verdict".
-    if (d.timing.keep_years == 0) {
-      stored.verdict = "replace";
-    } else if (age >= esl || std::abs(d.defender_euac - d.challenger_euac) <= 0.05 * d.challenger_euac) {
-      stored.verdict = "review";
-    } else {
-      stored.verdict = "keep";
-    }
+    // SPEC 6 "Nightly verdict", by the one rule (review/verdict_rule.h) on the case's figures.
+    stored.verdict = review::nightly_verdict(
+                         review::figures_of(d, *stored.marginal_cost_next_year,
+                                            r.defender->on(r.basis).costs.max_years()),
+                         age, 0.05)
+                         .verdict;
     stored.reason = "";  // the review's wording; each test fills it or expects it to differ
     result = r;
+    policy = run_policy(run);
   }
 
-  StoredRun run;
-  StoredClass stored_class;
-  StoredAsset stored;
+  results::RunRow run;
+  std::shared_ptr<const review::Policy> policy;  // run_policy(run)
+  results::ClassRow stored_class;
+  results::AssetRow stored;
   std::optional<replacement::CaseResult> result;  // the independent case analysis
 };
 

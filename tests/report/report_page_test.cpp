@@ -24,10 +24,10 @@ std::size_t count(const std::string& text, const std::string& what) {
 }
 
 // A stored asset `age` years old, consistent with its recomputation.
-explain::StoredAsset asset(int age, const std::string& id) {
+results::AssetRow asset(int age, const std::string& id) {
   PumpFixture f(age);
   f.stored.reason =
-      explain::explain_asset(f.run, f.stored_class, f.stored, std::nullopt).review.reason;
+      explain::explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt).review.finding.reason;
   f.stored.asset_id = id;
   return f.stored;
 }
@@ -36,16 +36,16 @@ ReportData invented_run() {
   PumpFixture f(0);
   ReportData data;
   data.run = f.run;
+  data.policy = f.policy;
   data.run.rows_read = 1234;
   data.run.rows_rejected = 2;
   data.classes = {f.stored_class};
-  for (const char* basis : {"before_tax", "after_tax"}) {
-    const auto& curve = f.result->challenger.on(std::string(basis) == "after_tax"
-                                                    ? replacement::Basis::after_tax
-                                                    : replacement::Basis::before_tax).curve;
+  for (const auto basis : {replacement::Basis::before_tax, replacement::Basis::after_tax}) {
+    const auto& curve = f.result->challenger.on(basis).curve;
     for (std::size_t n = 0; n < curve.euac.size(); ++n) {
-      data.challenger_curves.push_back({"pump-fixture", basis, static_cast<Years>(n + 1),
-                                        curve.euac[n], curve.marginal_costs[n]});
+      data.challenger_curves.push_back({"pump-fixture", std::nullopt, results::Role::challenger,
+                                        basis, static_cast<Years>(n + 1), curve.euac[n],
+                                        curve.marginal_costs[n]});
     }
   }
   data.classes[0].esl_years_before_tax = f.result->challenger.before_tax.curve.best_years;
@@ -117,9 +117,9 @@ TEST(ReportPage, ListsReplaceBeforeReview) {
 
 TEST(ReportPage, CapsThePerAssetCharts) {
   ReportData data = invented_run();
-  const explain::StoredAsset old = asset(11, "x");
+  const results::AssetRow old = asset(11, "x");
   for (std::size_t i = 0; i < kMaxAssetCharts; ++i) {
-    explain::StoredAsset copy = old;
+    results::AssetRow copy = old;
     copy.asset_id = fmt::format("EXTRA-{:04}", i);
     data.assets.push_back(copy);
   }

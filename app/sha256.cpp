@@ -1,11 +1,11 @@
 // SHA-256 through OpenSSL's EVP interface (see sha256.h).
-#include "db/sha256.h"
+#include "app/sha256.h"
 
 #include <openssl/evp.h>
 
 #include "core/errors.h"
 
-namespace tenure::db {
+namespace tenure::app {
 
 std::string sha256_hex(std::string_view text) {
   unsigned char digest[EVP_MAX_MD_SIZE];
@@ -22,4 +22,4 @@ std::string sha256_hex(std::string_view text) {
   return hex;
 }
 
-}  // namespace tenure::db
+}  // namespace tenure::app

@@ -7,8 +7,8 @@
 #include <string>
 #include <string_view>
 
-namespace tenure::db {
+namespace tenure::app {
 
 std::string sha256_hex(std::string_view text);
 
-}  // namespace tenure::db
+}  // namespace tenure::app

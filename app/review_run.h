@@ -1,4 +1,5 @@
-// The nightly review on one database connection, start to end (SPEC 6 and 7):
+// The nightly review on one database connection, start to end (SPEC 6 and 7), as `tenure
+// review`, tenure_review() and tenure_review_db() all run it:
 //   1. read the policy (stored or given) and check the input relations and columns exist;
 //   2. read the relations in one read transaction (a consistent snapshot, no lock held after);
 //   3. build the class models (review/), touching no table;
@@ -6,7 +7,7 @@
 //      result as the analysis (on the other cores) finishes it, then the rejected rows. A
 //      failure or a kill before its commit leaves the previous results intact.
 //
-//   Connection db = Connection::open("fleet.db");
+//   db::Connection db = db::Connection::open("fleet.db");
 //   RunSummary s = run_review(db, {.policy_json = text, .as_of = as_of});
 //   s.run_id; s.due; s.newly_due;
 #pragma once
@@ -19,9 +20,10 @@
 #include "db/connection.h"
 #include "db/cost_ranges.h"
 #include "fleet/date.h"
+#include "results/rows.h"
 #include "review/fleet_review.h"
 
-namespace tenure::db {
+namespace tenure::app {
 
 struct ReviewOptions {
   std::optional<std::string> policy_json;  // nullopt: the latest stored policy
@@ -29,8 +31,8 @@ struct ReviewOptions {
   review::Progress progress;               // optional progress callback
   std::function<void()> before_commit;     // optional hook, called just before COMMIT
   // A cost-event table whose rowids span at least this many is read in two halves at once
-  // where that is safe (cost_ranges.h); tests lower it to read small tables so.
-  std::int64_t split_min_rows = kSplitMinRows;
+  // where that is safe (db/cost_ranges.h); tests lower it to read small tables so.
+  std::int64_t split_min_rows = db::kSplitMinRows;
 };
 
 struct RunSummary {
@@ -43,8 +45,8 @@ struct RunSummary {
   std::int64_t keep = 0, review = 0, replace = 0;
   std::int64_t due = 0;        // review + replace
   std::int64_t newly_due = 0;  // due now, not due in the previous successful run
-  std::string basis;           // after_tax | before_tax
-  std::string money;           // real | nominal
+  replacement::Basis basis = replacement::Basis::after_tax;
+  results::MoneyTerms money = results::MoneyTerms::nominal;
   // Wall time of the phases, in seconds: reading the inputs; building the models, analysing the
   // assets and inserting the results (these overlap); the commit.
   double read_seconds = 0, analyse_write_seconds = 0, commit_seconds = 0;
@@ -52,9 +54,9 @@ struct RunSummary {
 
 // Throws InputError for a bad policy, a missing relation or column, or no policy at all;
 // RuntimeFailure when the database cannot be read or written.
-RunSummary run_review(Connection& db, const ReviewOptions& options);
+RunSummary run_review(db::Connection& db, const ReviewOptions& options);
 
 // Today's date in UTC.
 Date today_utc();
 
-}  // namespace tenure::db
+}  // namespace tenure::app
