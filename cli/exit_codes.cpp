@@ -1,10 +1,8 @@
 // The mapping of errors to exit codes and messages (see exit_codes.h).
 #include "cli/exit_codes.h"
 
-#include <algorithm>
+#include <exception>
 #include <string>
-
-#include "core/errors.h"
 
 namespace tenure::cli {
 namespace {
@@ -14,12 +12,6 @@ std::string command_name(const CLI::App& app) {
   std::string name = "tenure";
   for (const CLI::App* command : app.get_subcommands()) name += " " + command->get_name();
   return name;
-}
-
-// Messages must stay on one line, whatever the library that raised them put in.
-std::string one_line(std::string text) {
-  std::replace(text.begin(), text.end(), '\n', ' ');
-  return text;
 }
 
 int code(ExitCode exit_code) { return static_cast<int>(exit_code); }
@@ -37,21 +29,16 @@ int run_command_line(CLI::App& app, int argc, const char* const* argv, std::ostr
       app.exit(error, out, err);
       return code(ExitCode::ok);
     }
+    // A usage error (CLI11's words) is bad input.
+    const InputError usage("", error.what());
     const std::string name = command_name(app);
-    err << name << ": " << one_line(error.what()) << " (see '" << name << " --help')\n";
-    return code(ExitCode::bad_input);
-  } catch (const InputError& error) {
-    err << command_name(app) << ": " << one_line(error.what()) << '\n';
-    return code(ExitCode::bad_input);
-  } catch (const RuntimeFailure& error) {
-    err << command_name(app) << ": " << one_line(error.what()) << '\n';
-    return code(ExitCode::failure);
-  } catch (const std::exception& error) {
-    err << command_name(app) << ": internal error: " << one_line(error.what()) << '\n';
-    return code(ExitCode::failure);
+    err << name << ": " << message_of(std::make_exception_ptr(usage)) << " (see '" << name
+        << " --help')\n";
+    return code(usage.exit_code());
   } catch (...) {
-    err << command_name(app) << ": internal error of an unknown kind\n";
-    return code(ExitCode::failure);
+    const std::exception_ptr error = std::current_exception();
+    err << command_name(app) << ": " << message_of(error) << '\n';
+    return code(exit_code_of(error));
   }
 }
 

@@ -1,4 +1,5 @@
-// Exit codes of `tenure`, and the one place that turns errors into them and into messages.
+// Exit codes of `tenure` (tenure::ExitCode, core/errors.h), and the one place in the command
+// line that turns errors into them and into messages:
 //
 //   0  ok            the command did its job; also --help and --version
 //   1  failure       something went wrong that is not the input's fault: a RuntimeFailure (a
@@ -18,9 +19,9 @@
 
 #include <CLI/CLI.hpp>
 
-namespace tenure::cli {
+#include "core/errors.h"
 
-enum class ExitCode : int { ok = 0, failure = 1, bad_input = 2 };
+namespace tenure::cli {
 
 // Parses the arguments, which runs the chosen command's callback, and returns the exit code.
 // Help and version text go to `out`, error messages to `err`.

@@ -10,9 +10,9 @@ int main(int argc, char** argv) {
   const tenure::cli::Console console{std::cin, std::cout, std::cerr};
   try {
     tenure::cli::add_commands(app, console);
-  } catch (const std::exception& error) {
-    std::cerr << "tenure: internal error: " << error.what() << '\n';
-    return static_cast<int>(tenure::cli::ExitCode::failure);
+  } catch (...) {
+    std::cerr << "tenure: " << tenure::message_of(std::current_exception()) << '\n';
+    return static_cast<int>(tenure::exit_code_of(std::current_exception()));
   }
   return tenure::cli::run_command_line(app, argc, argv, std::cout, std::cerr);
 }

@@ -9,9 +9,9 @@
 #include <string>
 #include <string_view>
 
+#include "app/case_run.h"
 #include "core/errors.h"
 #include "core/version.h"
-#include "app/case_run.h"
 #include "plugin/review_call.h"
 
 namespace tenure::plugin {
@@ -39,6 +39,11 @@ std::optional<std::string> optional_text(const char* text) {
   return std::string(text);
 }
 
+// The C ABI's return codes are the command's exit codes (core/errors.h).
+static_assert(TENURE_OK == static_cast<int>(ExitCode::ok));
+static_assert(TENURE_FAILURE == static_cast<int>(ExitCode::failure));
+static_assert(TENURE_BAD_INPUT == static_cast<int>(ExitCode::bad_input));
+
 // Runs `body` and maps what it throws to a return code and a message (tenure.h).
 template <class Body>
 int guarded_call(char** error_message, Body&& body) noexcept {
@@ -46,17 +51,15 @@ int guarded_call(char** error_message, Body&& body) noexcept {
   try {
     body();
     return TENURE_OK;
-  } catch (const InputError& error) {
-    set_message(error_message, error.what());
-    return TENURE_BAD_INPUT;
-  } catch (const std::bad_alloc&) {
-    set_message(error_message, "out of memory");
-  } catch (const std::exception& error) {
-    set_message(error_message, error.what());
   } catch (...) {
-    set_message(error_message, "unexpected failure");
+    const std::exception_ptr error = std::current_exception();
+    try {
+      set_message(error_message, message_of(error));
+    } catch (...) {
+      set_message(error_message, "out of memory");
+    }
+    return static_cast<int>(exit_code_of(error));
   }
-  return TENURE_FAILURE;
 }
 
 }  // namespace

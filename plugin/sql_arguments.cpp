@@ -103,10 +103,8 @@ std::string describe(const Signature& signature, const std::exception_ptr& error
     return signature.message(input);
   } catch (const std::bad_alloc&) {
     throw;
-  } catch (const std::exception& other) {
-    return fmt::format("{}: {}", signature.function, other.what());
   } catch (...) {
-    return fmt::format("{}: unexpected failure", signature.function);
+    return fmt::format("{}: {}", signature.function, message_of(error));
   }
 }
 

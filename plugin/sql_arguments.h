@@ -85,7 +85,7 @@ class Arguments {
 };
 
 // The error message for the exception `error`: InputError through signature.message, anything
-// else as "<function>: <what()>". Throws std::bad_alloc only.
+// else as "<function>: " and its message_of (core/errors.h). Throws std::bad_alloc only.
 std::string describe(const Signature& signature, const std::exception_ptr& error);
 
 // Sets the exception `error` as the call's error: its message (describe), or SQLITE_NOMEM for
