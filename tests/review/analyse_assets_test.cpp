@@ -42,8 +42,8 @@ bool same_bits(const std::vector<double>& a, const std::vector<double>& b) {
 // The summary every asset keeps, whatever the detail.
 void expect_same_summary(const AssetReview& got, const AssetReview& alone) {
   EXPECT_EQ(got.asset, alone.asset);
-  EXPECT_EQ(got.verdict, alone.verdict);
-  EXPECT_EQ(got.reason, alone.reason);
+  EXPECT_EQ(got.finding.verdict, alone.finding.verdict);
+  EXPECT_EQ(got.finding.reason, alone.finding.reason);
   EXPECT_EQ(got.basis, alone.basis);
   EXPECT_TRUE(same_bits(got.book_value_now, alone.book_value_now));
   EXPECT_TRUE(same_bits(got.defender_euac_before_tax, alone.defender_euac_before_tax));
@@ -111,7 +111,7 @@ std::pair<Progress, AssetsReady> recorders(Calls& calls, const ReviewResult& pla
     calls.runs.emplace_back(static_cast<std::size_t>(run.data() - planned.assets.data()),
                             run.size());
     for (const AssetReview& a : run) {
-      if (a.reason.empty()) calls.unjudged = true;
+      if (a.finding.reason.empty()) calls.unjudged = true;
     }
   };
   return {progress, ready};
@@ -180,7 +180,7 @@ TEST_F(AnalyseAssets, EqualsReviewAssetOneByOneAndDeliversEveryRunInOrder) {
         review_asset(got.asset, fleet(), planned.class_named(record.asset_class), policy);
     expect_same_summary(got, alone);
     expect_same_detail(got, alone);
-    ++verdicts[static_cast<int>(got.verdict)];
+    ++verdicts[static_cast<int>(got.finding.verdict)];
     if (::testing::Test::HasFailure()) break;  // one asset's differences are enough to read
   }
   // The invented fleet exercises every verdict (a check on the fixture, not a golden value).

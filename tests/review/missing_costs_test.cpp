@@ -49,11 +49,11 @@ TEST(MissingCosts, AClassWithoutACompleteCostYearIsUnderReview) {
   for (const AssetReview& r : result.assets) {
     if (r.asset == pump) continue;
     SCOPED_TRACE(data.assets[r.asset].asset_id);
-    EXPECT_EQ(r.verdict, Verdict::review);
+    EXPECT_EQ(r.finding.verdict, Verdict::review);
     EXPECT_TRUE(r.due());
     // The key words of the reason: what is missing, and for which class.
-    EXPECT_NE(r.reason.find("cost history"), std::string::npos) << r.reason;
-    EXPECT_NE(r.reason.find("compressor"), std::string::npos) << r.reason;
+    EXPECT_NE(r.finding.reason.find("cost history"), std::string::npos) << r.finding.reason;
+    EXPECT_NE(r.finding.reason.find("compressor"), std::string::npos) << r.finding.reason;
     EXPECT_EQ(r.defender, nullptr);
     EXPECT_FALSE(r.decision);
     EXPECT_FALSE(r.class_esl_years);
@@ -63,8 +63,8 @@ TEST(MissingCosts, AClassWithoutACompleteCostYearIsUnderReview) {
     EXPECT_TRUE(r.inputs.ownership.operating_costs.empty());
     // The same as judging it alone.
     const AssetReview alone = review_asset(r.asset, data, compressors, policy);
-    EXPECT_EQ(r.verdict, alone.verdict);
-    EXPECT_EQ(r.reason, alone.reason);
+    EXPECT_EQ(r.finding.verdict, alone.finding.verdict);
+    EXPECT_EQ(r.finding.reason, alone.finding.reason);
   }
   // By hand: both are in their first year (age 0), so their book values are their first costs
   // (book value at year 0 is the basis, depreciation/schedule.h).

@@ -57,7 +57,7 @@ TEST(PlanReview, CountsRetiredAndNotYetInServiceAndListsTheRestByAssetId) {
   for (const AssetReview& a : planned.assets) listed.push_back(a.asset);
   EXPECT_EQ(listed, expected);
   for (const AssetReview& a : planned.assets) {
-    EXPECT_TRUE(a.reason.empty()) << "planned only, not judged yet: " << a.asset;
+    EXPECT_TRUE(a.finding.reason.empty()) << "planned only, not judged yet: " << a.asset;
     EXPECT_EQ(a.defender, nullptr);
   }
 }
@@ -108,12 +108,12 @@ TEST(ReviewFleet, JudgesThePlannedAssetsAsReviewAssetDoes) {
     EXPECT_EQ(got.asset, expected[j]);
     const AssetReview alone = review_asset(
         got.asset, f.data, result.class_named(f.data.assets[got.asset].asset_class), f.policy);
-    EXPECT_EQ(got.verdict, alone.verdict);
-    EXPECT_EQ(got.reason, alone.reason);
+    EXPECT_EQ(got.finding.verdict, alone.finding.verdict);
+    EXPECT_EQ(got.finding.reason, alone.finding.reason);
     EXPECT_EQ(got.inputs.age_years, alone.inputs.age_years);
     EXPECT_EQ(got.defender_euac_after_tax, alone.defender_euac_after_tax);
     EXPECT_EQ(got.class_esl_years, alone.class_esl_years);
-    EXPECT_FALSE(got.reason.empty());
+    EXPECT_FALSE(got.finding.reason.empty());
   }
   // By hand: PU-0001 went into service on the as-of date.
   EXPECT_EQ(result.assets[1].inputs.age_years, 0);
