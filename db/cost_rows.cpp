@@ -1,7 +1,6 @@
 // Rule (2) for the rows of one scan of the cost events (see cost_rows.h).
 #include "db/cost_rows.h"
 
-#include <cmath>
 #include <utility>
 
 #include <fmt/format.h>
@@ -47,14 +46,11 @@ void CostRows::read(const EventBatch& batch) {
   for (std::size_t i = 0; i < n; ++i) {
     const RawEvent& e = batch.rows[i];
     ++rows_;
-    const auto shown_or_null = [](std::uint8_t type, std::string_view text) {
-      return type == SQLITE_NULL ? std::string("NULL") : shown(text);
-    };
     const auto reject = [&](std::string why) {
       rejected_.push_back({rows_,
                            fmt::format("(asset_id {}, occurred_on {})",
-                                       shown_or_null(e.id_type, batch.id(e)),
-                                       shown_or_null(e.date_type, batch.date(e))),
+                                       shown_or_null(e.id_type == SQLITE_NULL, batch.id(e)),
+                                       shown_or_null(e.date_type == SQLITE_NULL, batch.date(e))),
                            std::move(why)});
     };
     std::uint32_t asset = e.id_type != SQLITE_NULL ? assets_[i] : fleet::AssetIndex::npos;
@@ -64,17 +60,12 @@ void CostRows::read(const EventBatch& batch) {
     }
     const std::optional<Date>& occurred = days_[i];
     if (!occurred) {
-      reject(fmt::format("occurred_on {} is not a valid date (YYYY-MM-DD)",
-                         shown_or_null(e.date_type, batch.date(e))));
+      reject(bad_date("occurred_on", e.date_type == SQLITE_NULL, batch.date(e)));
       continue;
     }
-    if (e.amount_type == SQLITE_NULL) { reject("amount is missing"); continue; }
-    if (e.amount_type != SQLITE_INTEGER && e.amount_type != SQLITE_FLOAT) {
-      reject(fmt::format("amount {} is not a number", shown(batch.amount_text(e))));
+    if (auto problem = amount_problem(e.amount_type, e.amount, batch.amount_text(e), "amount")) {
+      reject(*problem);
       continue;
-    }
-    if (std::isfinite(e.amount)) {
-      if (auto problem = magnitude_problem(e.amount, "amount")) { reject(*problem); continue; }
     }
     if (*occurred > data_.as_of) {  // rule (4)
       ++rows_after_as_of_;
@@ -85,15 +76,13 @@ void CostRows::read(const EventBatch& batch) {
       case fleet::EventFate::outside_complete_years:
         break;
       case fleet::EventFate::before_in_service:
-        reject(fmt::format("occurred_on is before the asset's in_service_on {}",
-                           data_.assets[asset].in_service.to_iso()));
+        reject(before_in_service("occurred_on", data_.assets[asset]));
         break;
       case fleet::EventFate::after_retirement:
-        reject(fmt::format("occurred_on is after the asset's retired_on {}",
-                           data_.assets[asset].retired_on->to_iso()));
+        reject(after_retirement("occurred_on", data_.assets[asset]));
         break;
-      case fleet::EventFate::non_finite_amount:
-        reject("amount is not a finite number");
+      case fleet::EventFate::non_finite_amount:  // refused above already (amount_problem)
+        reject(*amount_problem(e.amount_type, e.amount, batch.amount_text(e), "amount"));
         break;
     }
   }

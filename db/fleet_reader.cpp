@@ -1,7 +1,6 @@
 // Reading the input relations with validation and rejected rows (see fleet_reader.h).
 #include "db/fleet_reader.h"
 
-#include <cmath>
 #include <exception>
 #include <optional>
 #include <string_view>
@@ -33,20 +32,12 @@ struct RequiredColumns {
 
 // A column's value as text for messages, whatever its storage class.
 std::string shown_value(const Statement& q, int column) {
-  if (q.is_null(column)) return "NULL";
-  return shown(q.text(column));
+  return shown_or_null(q.is_null(column), q.text(column));
 }
 
-// Rule (1)-(3) amounts: stored as a number (text that SQLite could not convert stays text, and
-// is refused rather than read as 0), finite and within kMaxAmount.
+// Rules (1) to (3) for an amount column (row_checks.h).
 std::optional<std::string> number_problem(const Statement& q, int column, const char* name) {
-  const int type = q.column_type(column);
-  if (type == SQLITE_NULL) return fmt::format("{} is missing", name);
-  if (type != SQLITE_INTEGER && type != SQLITE_FLOAT) {
-    return fmt::format("{} {} is not a number", name, shown_value(q, column));
-  }
-  if (!std::isfinite(q.real(column))) return fmt::format("{} is not a finite number", name);
-  return magnitude_problem(q.real(column), name);
+  return amount_problem(q.column_type(column), q.real(column), q.text(column), name);
 }
 
 std::optional<Date> date_column(const Statement& q, int column) {
@@ -55,7 +46,7 @@ std::optional<Date> date_column(const Statement& q, int column) {
 }
 
 std::string bad_date(const Statement& q, int column, const char* name) {
-  return fmt::format("{} {} is not a valid date (YYYY-MM-DD)", name, shown_value(q, column));
+  return db::bad_date(name, q.is_null(column), q.text(column));
 }
 
 class Reader {
@@ -180,13 +171,11 @@ class Reader {
       if (auto problem = number_problem(q, 2, "amount")) { reject(source, ref(), *problem); continue; }
       if (q.real(2) < 0) { reject(source, ref(), "amount must not be negative"); continue; }
       if (*valued < record.in_service) {
-        reject(source, ref(), fmt::format("valued_on is before the asset's in_service_on {}",
-                                          record.in_service.to_iso()));
+        reject(source, ref(), before_in_service("valued_on", record));
         continue;
       }
       if (record.retired_on && *valued > *record.retired_on) {
-        reject(source, ref(), fmt::format("valued_on is after the asset's retired_on {}",
-                                          record.retired_on->to_iso()));
+        reject(source, ref(), after_retirement("valued_on", record));
         continue;
       }
       if (*valued > data_.as_of) {  // rule (4)

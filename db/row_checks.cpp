@@ -1,6 +1,8 @@
 // What the readers of the input relations share (see row_checks.h).
 #include "db/row_checks.h"
 
+#include <sqlite3.h>
+
 #include <cmath>
 
 #include <fmt/format.h>
@@ -65,6 +67,32 @@ std::string shown(std::string_view s) {
   }
   if (i < s.size()) out += "...";
   return out + "'";
+}
+
+std::string shown_or_null(bool is_null, std::string_view text) {
+  return is_null ? std::string("NULL") : shown(text);
+}
+
+std::optional<std::string> amount_problem(int type, double value, std::string_view text,
+                                          const char* name) {
+  if (type == SQLITE_NULL) return fmt::format("{} is missing", name);
+  if (type != SQLITE_INTEGER && type != SQLITE_FLOAT) {
+    return fmt::format("{} {} is not a number", name, shown(text));
+  }
+  if (!std::isfinite(value)) return fmt::format("{} is not a finite number", name);
+  return magnitude_problem(value, name);
+}
+
+std::string bad_date(const char* name, bool is_null, std::string_view text) {
+  return fmt::format("{} {} is not a valid date (YYYY-MM-DD)", name, shown_or_null(is_null, text));
+}
+
+std::string before_in_service(const char* name, const review::AssetRecord& asset) {
+  return fmt::format("{} is before the asset's in_service_on {}", name, asset.in_service.to_iso());
+}
+
+std::string after_retirement(const char* name, const review::AssetRecord& asset) {
+  return fmt::format("{} is after the asset's retired_on {}", name, asset.retired_on->to_iso());
 }
 
 std::optional<std::string> magnitude_problem(double amount, const char* name) {

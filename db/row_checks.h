@@ -1,10 +1,14 @@
-// What the readers of the input relations share (fleet_reader.cpp for assets and valuations,
-// cost_rows.cpp for cost events): how a value is shown in a rejection, the amount bound of
-// fleet_reader.h (core/checks.h), and which accepted asset a row names.
+// The row rules the readers of the input relations share (fleet_reader.cpp for assets and
+// valuations, cost_rows.cpp for cost events), each worded once: how a value is shown in a
+// rejection, what makes an amount or a date usable (fleet_reader.h rules 1 to 3), dates against
+// the asset's service, and which accepted asset a row names.
 //
 //   shown("PU-0017");                         // "'PU-0017'", control bytes as '?', long text cut
 //   valid_utf8("\xC3\x28");                    // false
+//   amount_problem(SQLITE_TEXT, 0, "n/a", "amount");  // "amount 'n/a' is not a number"
 //   magnitude_problem(2e15, "amount");        // "amount 2e+15 is larger in magnitude than 1e+15"
+//   bad_date("occurred_on", false, "2023-02-29");
+//   // "occurred_on '2023-02-29' is not a valid date (YYYY-MM-DD)"
 //   AcceptedAssets assets;  assets.index.insert("PU-0017", 0);
 //   assets.find("PU-9", false, reason);       // npos; reason "asset_id 'PU-9' is not in ..."
 #pragma once
@@ -18,6 +22,7 @@
 
 #include "core/checks.h"  // kMaxAmount
 #include "fleet/asset_index.h"
+#include "review/fleet_data.h"
 
 namespace tenure::db {
 
@@ -29,8 +34,24 @@ bool valid_utf8(std::string_view s);
 // and bytes that are not UTF-8 shown as '?', so that the stored text is one line of valid UTF-8.
 std::string shown(std::string_view s);
 
+// "NULL" for a NULL value, else shown(text).
+std::string shown_or_null(bool is_null, std::string_view text);
+
 // An amount beyond kMaxAmount, or nullopt.
 std::optional<std::string> magnitude_problem(double amount, const char* name);
+
+// What is wrong with an amount column, or nullopt: `type` is its SQLite storage class, `value`
+// its number and `text` its text. It must be stored as a number (text that SQLite could not
+// convert stays text, and is refused rather than read as 0), finite, and within kMaxAmount.
+std::optional<std::string> amount_problem(int type, double value, std::string_view text,
+                                          const char* name);
+
+// "<name> <value> is not a valid date (YYYY-MM-DD)".
+std::string bad_date(const char* name, bool is_null, std::string_view text);
+
+// A row of the asset's dated before it went into service, or after it retired.
+std::string before_in_service(const char* name, const review::AssetRecord& asset);
+std::string after_retirement(const char* name, const review::AssetRecord& asset);
 
 // The asset rows read so far: the accepted ones by id, and the ids of rejected ones (so that a
 // cost event of a rejected asset says so). Read-only once the asset relation is read, so any
