@@ -9,7 +9,8 @@ namespace tenure::review {
 
 Date one_year_before(Date as_of) {
   const int day = as_of.month() == 2 && as_of.day() == 29 ? 28 : as_of.day();
-  return *Date::from_ymd(as_of.year() - 1, as_of.month(), day);
+  // In the first year dates have (1400), the window starts at the first date there is.
+  return Date::from_ymd(as_of.year() - 1, as_of.month(), day).value_or(*Date::from_ymd(1400, 1, 1));
 }
 
 DefenderInputs defender_inputs(std::size_t asset, const FleetData& data, const ClassModel& model) {

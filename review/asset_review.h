@@ -50,8 +50,9 @@ struct AssetReview {
   bool due() const { return finding.due(); }
 };
 
-// The date one year before `as_of` (29 February -> 28 February): valuations dated after it, up
-// to the as-of date, count as the market value now.
+// The date one year before `as_of` (29 February -> 28 February; 1400-01-01, the first date there
+// is, for an as-of date in 1400): valuations dated from it to the as-of date count as the market
+// value now.
 Date one_year_before(Date as_of);
 
 // The defender's future (SPEC 6, nightly defender): costs on the class curve at ages a+1, a+2,

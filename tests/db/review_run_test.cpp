@@ -10,13 +10,14 @@
 
 #include <fmt/format.h>
 
-#include "core/errors.h"
 #include "app/review_run.h"
+#include "core/errors.h"
 #include "db_test_support.h"
 #include "fixtures/fleets/fixture_fleets.h"
 #include "formats/case_json.h"
 #include "formats/policy_json.h"
 #include "replacement/case_analysis.h"
+#include "review/verdict_rule.h"
 
 namespace tenure::db {
 namespace {
@@ -116,10 +117,14 @@ TEST_P(NoiselessFleet, VerdictsEqualTheDefenderCaseAnalysis) {
     SCOPED_TRACE(std::string(q.text(0)));
     EXPECT_EQ(q.integer(5), d.timing.keep_years);
     EXPECT_NEAR(q.real(6), d.defender_euac, 1e-6 * d.defender_euac);
-    std::string expected = "keep";
-    if (d.timing.keep_years == 0) expected = "replace";
-    else if (age >= esl || std::abs(d.defender_euac - c_star) <= 0.05 * c_star) expected = "review";
-    EXPECT_EQ(std::string(q.text(4)), expected);
+    // The one verdict rule (review/verdict_rule.h, tested on its own) on the case's figures.
+    EXPECT_EQ(d.challenger_euac, c_star);
+    EXPECT_EQ(d.challenger_esl, esl);
+    const auto& weighed = r.defender->on(r.basis);
+    const review::VerdictFinding expected = review::nightly_verdict(
+        review::figures_of(d, weighed.curve.marginal_costs[0], weighed.costs.max_years()), age,
+        0.05);
+    EXPECT_EQ(std::string(q.text(4)), review::to_string(expected.verdict));
   }
   EXPECT_EQ(rows, 30);
 }
