@@ -53,14 +53,6 @@ struct ScheduleOptions {
   CLI::Option* dispose_given = nullptr;
 };
 
-std::string method_names() {
-  std::vector<std::string_view> names;
-  for (const formats::DepreciationForm& form : formats::depreciation_forms()) {
-    names.push_back(form.method);
-  }
-  return fmt::format("{}", fmt::join(names, ", "));
-}
-
 // An option that sets a field of the depreciation object; --life sets life_years or, for
 // macrs, recovery_years.
 struct Parameter {
@@ -76,7 +68,7 @@ nlohmann::json depreciation_object(const ScheduleOptions& o) {
   const formats::DepreciationForm* form = formats::find_depreciation_form(o.method);
   if (form == nullptr) {
     throw InputError("--method", fmt::format("unknown method '{}' (expected one of {})", o.method,
-                                             method_names()));
+                                             formats::depreciation_method_names()));
   }
   const std::vector<Parameter> parameters = {
       {"--life", o.life_given->count() > 0, {"life_years", "recovery_years"}, o.life},
@@ -147,7 +139,7 @@ void add_schedule_command(CLI::App& app, const Console& console) {
   auto o = std::make_shared<ScheduleOptions>();
   CLI::App* command = app.add_subcommand(
       "schedule", "Print a depreciation schedule: each year's deduction and book value");
-  command->add_option("--method", o->method, "one of " + method_names())
+  command->add_option("--method", o->method, "one of " + formats::depreciation_method_names())
       ->type_name("METHOD")
       ->required();
   command->add_option("--basis", o->basis, "depreciable basis (first cost), > 0")

@@ -14,14 +14,6 @@
 namespace tenure::plugin {
 namespace {
 
-std::string method_names() {
-  std::vector<std::string_view> names;
-  for (const formats::DepreciationForm& form : formats::depreciation_forms()) {
-    names.push_back(form.method);
-  }
-  return fmt::format("{}", fmt::join(names, ", "));
-}
-
 bool uses(const formats::DepreciationForm& form, std::string_view field) {
   return std::find(form.fields.begin(), form.fields.end(), field) != form.fields.end();
 }
@@ -45,7 +37,7 @@ depreciation::Schedule schedule_from(const Arguments& args) {
   const formats::DepreciationForm* form = formats::find_depreciation_form(method);
   if (form == nullptr) {
     throw InputError("", fmt::format("unknown method '{}' (expected one of {})", method,
-                                     method_names()));
+                                     formats::depreciation_method_names()));
   }
   const Money basis = args.number("basis");
   nlohmann::json object = {{"method", method}};
