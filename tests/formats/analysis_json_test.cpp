@@ -4,28 +4,17 @@
 
 #include <gtest/gtest.h>
 
-#include "formats/case_json.h"
+#include "one_year_case.h"
 
 namespace tenure::formats {
 namespace {
 
 using nlohmann::json;
 
-// Invented one-year case, worked by hand below: 10% MARR, 25% tax, so 7.5% after-tax MARR.
-const char* kCase = R"({
-  "marr": 0.10, "income_tax_rate": 0.25,
-  "challenger": {"first_cost": 1000, "operating_costs": [100], "market_values": [800],
-                 "depreciation": {"method": "straight_line", "life_years": 1, "salvage": 0}},
-  "defender": {"first_cost": 500, "age_years": 3, "market_value_now": 200,
-               "operating_costs": [150], "market_values": [100],
-               "depreciation": {"method": "none"}}})";
-
-replacement::CaseResult analysed() { return replacement::analyse(read_case(kCase)); }
-
 constexpr double kTol = 1e-9;  // hand values of a few hundred; only rounding noise
 
 TEST(AnalysisJson, AssetAsTheCaseWritesIt) {
-  const json out = asset_analysis_to_json(analysed().defender.value(), "best_years");
+  const json out = asset_analysis_to_json(testing::one_year_case().defender.value(), "best_years");
   // Before tax: 200 x 1.1 + 150 - 100 = 270; after tax: 275 x 1.075 + 112.50 - 200 = 208.125.
   const json& before = out.at("before_tax");
   EXPECT_EQ(before.at("best_years"), 1);
@@ -44,7 +33,7 @@ TEST(AnalysisJson, AssetAsTheCaseWritesIt) {
 }
 
 TEST(AnalysisJson, AuditFiguresAddPresentWorths) {
-  const json out = asset_analysis_to_json(analysed().defender.value(), "best_years",
+  const json out = asset_analysis_to_json(testing::one_year_case().defender.value(), "best_years",
                                           {.present_worth_rate = 0.075, .pw_cost = true});
   const json& after = out.at("after_tax");
   EXPECT_DOUBLE_EQ(after.at("rate").get<double>(), 0.075);
@@ -56,7 +45,7 @@ TEST(AnalysisJson, AuditFiguresAddPresentWorths) {
 
 TEST(AnalysisJson, OpportunityCost) {
   // Sold now for 200 against a book value of 500: a loss of 300 saves 75, 275 after tax.
-  const json out = opportunity_cost_to_json(analysed().defender->table.start);
+  const json out = opportunity_cost_to_json(testing::one_year_case().defender->table.start);
   EXPECT_EQ(out, json::parse(R"({"market_value_now": 200, "book_value_now": 500,
                                  "tax_on_sale_now": -75, "after_tax": 275})"));
 }

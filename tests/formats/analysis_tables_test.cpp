@@ -4,21 +4,10 @@
 
 #include <gtest/gtest.h>
 
-#include "formats/case_json.h"
+#include "one_year_case.h"
 
 namespace tenure::formats {
 namespace {
-
-// Invented one-year case, worked by hand below: 10% MARR, 25% tax, so 7.5% after-tax MARR.
-const char* kCase = R"({
-  "marr": 0.10, "income_tax_rate": 0.25,
-  "challenger": {"first_cost": 1000, "operating_costs": [100], "market_values": [800],
-                 "depreciation": {"method": "straight_line", "life_years": 1, "salvage": 0}},
-  "defender": {"first_cost": 500, "age_years": 3, "market_value_now": 200,
-               "operating_costs": [150], "market_values": [100],
-               "depreciation": {"method": "none"}}})";
-
-replacement::CaseResult analysed() { return replacement::analyse(read_case(kCase)); }
 
 bool contains(const std::string& text, const std::string& part) {
   return text.find(part) != std::string::npos;
@@ -32,7 +21,8 @@ TEST(AnalysisTables, BasisWordsAndMarks) {
 }
 
 TEST(AnalysisTables, CashFlowsAsTheCasePrintsThem) {
-  const std::string text = cash_flow_tables("Challenger", analysed().challenger.table);
+  const std::string text =
+      cash_flow_tables("Challenger", testing::one_year_case().challenger.table);
   // Year 1 by hand: taxable income -100 - 1000 depreciation = -1100, tax -275, so the owner
   // receives -100 + 275 = 175; sold for 800 over a book value of 0: tax 200, net 600.
   EXPECT_EQ(text,
@@ -52,7 +42,7 @@ TEST(AnalysisTables, CashFlowsAsTheCasePrintsThem) {
 }
 
 TEST(AnalysisTables, CashFlowsWithAgeAndPresentWorth) {
-  const std::string text = cash_flow_tables("7. Defender", analysed().defender->table,
+  const std::string text = cash_flow_tables("7. Defender", testing::one_year_case().defender->table,
                                             {.age_at_start = 3, .present_worth_rate = 0.075});
   // Kept one more year the defender is 4; its flow -150 x (1 - 0.25) = -112.50 is worth
   // -112.50 / 1.075 = -104.65 now (closed form).
@@ -68,7 +58,7 @@ TEST(AnalysisTables, CashFlowsWithAgeAndPresentWorth) {
 }
 
 TEST(AnalysisTables, LifeCurveAsTheCasePrintsIt) {
-  const std::string text = life_curve_table(analysed().defender.value());
+  const std::string text = life_curve_table(testing::one_year_case().defender.value());
   // Before tax at 10%: (200 x 1.1 + 150 - 100) = 270; after tax at 7.5%: the 275 given up by
   // keeping x 1.075 + 112.50 - the 200 a sale then brings after tax (a loss of 400 saves 100)
   // = 208.125, half a cent up.
@@ -81,7 +71,7 @@ TEST(AnalysisTables, LifeCurveAsTheCasePrintsIt) {
 
 TEST(AnalysisTables, LifeCurveWithAgeAndPresentWorthOfCost) {
   const std::string text =
-      life_curve_table(analysed().defender.value(),
+      life_curve_table(testing::one_year_case().defender.value(),
                        {.age_at_start = 3, .pw_cost_basis = replacement::Basis::after_tax});
   // The after-tax present worth of keeping one year: 208.125 / 1.075 = 193.60 (closed form).
   EXPECT_TRUE(contains(text, "  years kept   age at end   PW of cost, after-tax   EUAC before tax"))
@@ -91,7 +81,8 @@ TEST(AnalysisTables, LifeCurveWithAgeAndPresentWorthOfCost) {
 }
 
 TEST(AnalysisTables, OpportunityCostWithAndWithoutTheGain) {
-  const tax::SaleFlow& now = analysed().defender->table.start;
+  const replacement::CaseResult result = testing::one_year_case();
+  const tax::SaleFlow& now = result.defender->table.start;
   // Sold now for 200 against a book value of 500: a loss of 300 saves 75 of tax, so keeping
   // gives up 275 after tax.
   EXPECT_EQ(opportunity_cost_table(now),
