@@ -41,10 +41,8 @@
 #include <array>
 #include <memory>
 #include <new>
-#include <optional>
 #include <vector>
 
-#include "formats/json_path.h"
 #include "plugin/depreciation_arguments.h"
 #include "plugin/functions.h"
 
@@ -163,12 +161,8 @@ int filter(sqlite3_vtab_cursor* base, int mask, const char*, int argc, sqlite3_v
       if (!cursor->inputs[input]) throw std::bad_alloc();
       args.set(input, value);
     }
-    const depreciation::Schedule schedule = schedule_from(args);
-    std::optional<Years> disposal;
-    if (const auto year = args.optional_number("dispose_in_year")) {
-      disposal = formats::whole_years(*year, "dispose_in_year", 1);
-    }
-    cursor->rows = schedule.rows(disposal);
+    const formats::FlatSchedule flat = schedule_from(args);
+    cursor->rows = flat.schedule.rows(flat.disposal_year);
     return SQLITE_OK;
   } catch (...) {
     return filter_error(base->pVtab, std::current_exception());
