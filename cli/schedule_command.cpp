@@ -1,7 +1,6 @@
-// `tenure schedule`: one depreciation schedule from command-line parameters. The parameters go
-// through the case file's depreciation reader, so the command accepts exactly what a case file
-// accepts, and its errors are renamed from fields ("life_years") to options ("--life").
-#include <algorithm>
+// `tenure schedule`: one depreciation schedule from command-line parameters. They are read by
+// formats/flat_depreciation.h, as the SQL functions' are, so the command accepts what a case file
+// accepts; its errors name the options ("--life") that set the flat parameters ("life").
 #include <map>
 #include <memory>
 #include <optional>
@@ -9,29 +8,30 @@
 #include <vector>
 
 #include <fmt/format.h>
-#include <nlohmann/json.hpp>
 
 #include "cli/commands.h"
 #include "core/errors.h"
-#include "depreciation/schedule.h"
 #include "formats/depreciation_json.h"
-#include "formats/json_path.h"
+#include "formats/flat_depreciation.h"
 #include "formats/schedule_json.h"
 
 namespace tenure::cli {
 namespace {
 
-// The option that sets each field of a depreciation object.
-const std::map<std::string, std::string, std::less<>> kOptionForField = {
-    {"method", "--method"},       {"life_years", "--life"},
-    {"recovery_years", "--life"}, {"rate", "--rate"},
-    {"salvage", "--salvage"},     {"switch_to_straight_line", "--switch/--no-switch"},
-    {"basis", "--basis"},         {"disposal_year", "--dispose-in-year"},
+// The option that sets each flat parameter.
+const std::map<std::string, std::string, std::less<>> kOptionForParameter = {
+    {"method", "--method"},
+    {"basis", "--basis"},
+    {"salvage", "--salvage"},
+    {"life", "--life"},
+    {"rate", "--rate"},
+    {"switch_to_straight_line", "--switch/--no-switch"},
+    {"disposal_year", "--dispose-in-year"},
 };
 
-std::string option_for(std::string_view field) {
-  const auto found = kOptionForField.find(field);
-  return found == kOptionForField.end() ? std::string(field) : found->second;
+std::string option_for(std::string_view parameter) {
+  const auto found = kOptionForParameter.find(parameter);
+  return found == kOptionForParameter.end() ? std::string(parameter) : found->second;
 }
 
 struct ScheduleOptions {
@@ -53,91 +53,48 @@ struct ScheduleOptions {
   CLI::Option* dispose_given = nullptr;
 };
 
-std::string method_names() {
-  std::vector<std::string_view> names;
-  for (const formats::DepreciationForm& form : formats::depreciation_forms()) {
-    names.push_back(form.method);
-  }
-  return fmt::format("{}", fmt::join(names, ", "));
+template <class T>
+std::optional<T> if_given(bool given, T value) {
+  return given ? std::optional<T>(value) : std::nullopt;
 }
 
-// An option that sets a field of the depreciation object; --life sets life_years or, for
-// macrs, recovery_years.
-struct Parameter {
-  std::string name;
-  bool given;
-  std::vector<std::string_view> fields;
-  nlohmann::json value;
-};
-
-// The depreciation object the options describe. A field the method needs whose option was not
-// given, and an option the method does not use, are errors naming the option.
-nlohmann::json depreciation_object(const ScheduleOptions& o) {
-  const formats::DepreciationForm* form = formats::find_depreciation_form(o.method);
-  if (form == nullptr) {
-    throw InputError("--method", fmt::format("unknown method '{}' (expected one of {})", o.method,
-                                             method_names()));
-  }
-  const std::vector<Parameter> parameters = {
-      {"--life", o.life_given->count() > 0, {"life_years", "recovery_years"}, o.life},
-      {"--rate", o.rate_given->count() > 0, {"rate"}, o.rate},
-      {"--salvage", o.salvage_given->count() > 0, {"salvage"}, o.salvage},
-      {"--switch/--no-switch",
-       o.switch_given->count() + o.no_switch_given->count() > 0,
-       {"switch_to_straight_line"},
-       o.switch_to_straight_line},
-  };
-  auto sets = [](const Parameter& parameter, std::string_view field) {
-    return std::find(parameter.fields.begin(), parameter.fields.end(), field) !=
-           parameter.fields.end();
-  };
-  nlohmann::json object = {{"method", o.method}};
-  std::vector<std::string> taken;
-  for (std::string_view field : form->fields) {
-    for (const Parameter& parameter : parameters) {
-      if (!sets(parameter, field)) continue;
-      if (!parameter.given) {
-        throw InputError(parameter.name, fmt::format("required by method {}", o.method));
-      }
-      object[std::string(field)] = parameter.value;
-      taken.push_back(parameter.name);
-    }
-  }
-  for (const Parameter& parameter : parameters) {
-    if (parameter.given && std::find(taken.begin(), taken.end(), parameter.name) == taken.end()) {
-      throw InputError(
-          parameter.name,
-          fmt::format("not used by method {} (it takes {})", o.method,
-                      taken.empty() ? "no parameters" : fmt::format("{}", fmt::join(taken, ", "))));
-    }
-  }
-  return object;
+formats::FlatDepreciation flat_parameters(const ScheduleOptions& o) {
+  return {.method = o.method,
+          .basis = o.basis,
+          .salvage = if_given(o.salvage_given->count() > 0, o.salvage),
+          .life = if_given(o.life_given->count() > 0, o.life),
+          .rate = if_given(o.rate_given->count() > 0, o.rate),
+          .switch_to_straight_line = if_given(
+              o.switch_given->count() + o.no_switch_given->count() > 0, o.switch_to_straight_line),
+          .disposal_year = if_given(o.dispose_given->count() > 0, o.dispose_in_year)};
 }
 
-// An error about a field ("life_years" or "$.life_years") as one about its option.
-InputError renamed(const InputError& error) {
-  std::string_view where = error.where();
-  if (where.starts_with("$.")) where.remove_prefix(2);
-  return InputError(option_for(where), error.rule());
-}
+// The command line's words for a parameter that does not fit the method: an option the method
+// needs and one it does not use, with the options it takes.
+const formats::MisfitRefusals kRefusals{
+    [](std::string_view parameter, std::string_view method) {
+      return InputError(std::string(parameter), fmt::format("required by method {}", method));
+    },
+    [](std::string_view parameter, std::string_view method,
+       const std::vector<std::string_view>& taken) {
+      std::vector<std::string> options;
+      for (std::string_view name : taken) options.push_back(option_for(name));
+      return InputError(std::string(parameter),
+                        fmt::format("not used by method {} (it takes {})", method,
+                                    options.empty() ? "no parameters"
+                                                    : fmt::format("{}", fmt::join(options, ", "))));
+    }};
 
 void run_schedule(const ScheduleOptions& options, const Console& console) {
   try {
-    const nlohmann::json object = depreciation_object(options);
-    const depreciation::Spec spec = formats::read_depreciation(formats::JsonObject(object, "$"));
-    const auto method = depreciation::make_method(spec);
-    const depreciation::Schedule schedule(*method, options.basis);
-    std::optional<Years> disposal_year;
-    if (options.dispose_given->count() > 0) {
-      disposal_year = formats::whole_years(options.dispose_in_year, "disposal_year", 1);
-    }
+    const formats::FlatSchedule s = formats::flat_schedule(flat_parameters(options), kRefusals);
     if (options.format == "json") {
-      console.out << formats::schedule_to_json(spec, schedule, disposal_year).dump(2) << '\n';
+      console.out << formats::schedule_to_json(s.spec, s.schedule, s.disposal_year).dump(2) << '\n';
     } else {
-      console.out << formats::schedule_to_table(spec, schedule, disposal_year);
+      console.out << formats::schedule_to_table(s.spec, s.schedule, s.disposal_year);
     }
   } catch (const InputError& error) {
-    throw renamed(error);
+    throw InputError(option_for(error.where()), error.rule());
   }
 }
 
@@ -147,7 +104,7 @@ void add_schedule_command(CLI::App& app, const Console& console) {
   auto o = std::make_shared<ScheduleOptions>();
   CLI::App* command = app.add_subcommand(
       "schedule", "Print a depreciation schedule: each year's deduction and book value");
-  command->add_option("--method", o->method, "one of " + method_names())
+  command->add_option("--method", o->method, "one of " + formats::depreciation_method_names())
       ->type_name("METHOD")
       ->required();
   command->add_option("--basis", o->basis, "depreciable basis (first cost), > 0")
@@ -179,6 +136,7 @@ void add_schedule_command(CLI::App& app, const Console& console) {
       "  macrs                                --life (recovery period 3, 5, 7, 10, 15 or 20;\n"
       "                                       GDS, half-year convention)\n"
       "  none                                 nothing\n"
+      "macrs and none recover the whole basis: they accept --salvage 0 and refuse others.\n"
       "With --dispose-in-year Y the rows stop at Y, and year Y takes the disposal-year\n"
       "deduction: half a year for macrs before its last table year, a full year otherwise.\n"
       "\n"

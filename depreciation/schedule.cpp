@@ -45,4 +45,19 @@ Money Schedule::book_value_if_sold(Years year) const {
   return book_value(year - 1) - deduction_if_sold(year);
 }
 
+std::vector<ScheduleRow> Schedule::rows(std::optional<Years> disposal_year) const {
+  if (disposal_year && *disposal_year < 1) throw InputError("disposal_year", "must be >= 1");
+  const Years last = disposal_year.value_or(years());
+  std::vector<ScheduleRow> out;
+  out.reserve(static_cast<std::size_t>(last));
+  for (Years year = 1; year <= last; ++year) {
+    if (year == disposal_year) {
+      out.push_back({year, deduction_if_sold(year), book_value_if_sold(year)});
+    } else {
+      out.push_back({year, deduction(year), book_value(year)});
+    }
+  }
+  return out;
+}
+
 }  // namespace tenure::depreciation

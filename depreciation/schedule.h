@@ -6,14 +6,23 @@
 //   s.book_value(2);            // 4800
 //   s.deduction_if_sold(3);     // 960: half of year 3's 1920, MACRS disposal-year rule
 //   s.book_value_if_sold(3);    // 3840
+//   s.rows(3);                  // {1, 2000, 8000}, {2, 3200, 4800}, {3, 960, 3840}
 #pragma once
 
+#include <optional>
 #include <vector>
 
 #include "core/types.h"
 #include "depreciation/method.h"
 
 namespace tenure::depreciation {
+
+// One year of a schedule as it is listed: the year's deduction and the book value at its end.
+struct ScheduleRow {
+  Years year;
+  Money depreciation;
+  Money book_value;
+};
 
 class Schedule {
  public:
@@ -30,6 +39,11 @@ class Schedule {
   Money deduction_if_sold(Years year) const;
   // Book value at a sale at the end of `year`: book_value(year - 1) - deduction_if_sold(year).
   Money book_value_if_sold(Years year) const;
+  // The schedule year by year. Without a disposal year: years 1..years(), full-year deductions.
+  // With one (>= 1, else InputError("disposal_year", ...)): years 1..disposal_year, which may
+  // run past years() with nothing more to deduct, and the disposal year takes
+  // deduction_if_sold and book_value_if_sold (the disposal-year rule).
+  std::vector<ScheduleRow> rows(std::optional<Years> disposal_year = std::nullopt) const;
 
  private:
   Money basis_;

@@ -4,6 +4,7 @@
 #include <fmt/format.h>
 
 #include "explain/text_sections.h"
+#include "formats/analysis_tables.h"
 #include "formats/text_table.h"
 #include "interest/factors.h"
 
@@ -29,70 +30,28 @@ std::string defender_future(const Explanation& e) {
 }
 
 std::string selling_now(const Explanation& e) {
-  const tax::SaleFlow& now = e.review.defender->table.start;
-  TextTable t({"selling now instead of keeping", "amount"}, 1);
-  t.add_row({"market value now", money(now.market_value)});
-  t.add_row({"book value now", money(now.book_value)});
-  t.add_row({"gain on a sale now", money(now.gain)});
-  t.add_row({"tax on a sale now (negative saves tax)", money(now.tax)});
-  t.add_row({"given up by keeping, after tax", money(now.net_proceeds)});
-  return section("6. Defender: its opportunity cost (what keeping it gives up)", t.render());
+  return section(
+      "6. Defender: its opportunity cost (what keeping it gives up)",
+      formats::opportunity_cost_table(e.review.defender->table.start, {.gain_on_sale = true}));
 }
+
+namespace {
+
+// "age at end" only for an asset already owned; for a new one it equals the year.
+std::optional<Years> age_column(Years age) { return age > 0 ? std::optional(age) : std::nullopt; }
+
+}  // namespace
 
 std::string cash_flows(const std::string& who, const replacement::AfterTaxTable& table, Rate rate,
                        Years age) {
-  // "age at end" only for an asset already owned; for a new one it equals the year.
-  const bool aged = age > 0;
-  std::vector<std::string> headers{"year", "operating cost", "depreciation", "book value",
-                                   "taxable income", "income tax", "after-tax cash flow",
-                                   "present worth at " + percent(rate)};
-  if (aged) headers.insert(headers.begin() + 1, "age at end");
-  TextTable kept(headers);
-  TextTable sold({"year", "market value", "depreciation", "book value", "gain", "disposal tax",
-                  "net proceeds", "after-tax cash flow"});
-  for (const replacement::AfterTaxYear& y : table.years) {
-    const std::string k = std::to_string(y.kept.year);
-    std::vector<std::string> row{k, money(y.kept.operating_cost), money(y.kept.depreciation),
-                                 money(y.kept.book_value), money(y.kept.taxable_income),
-                                 money(y.kept.income_tax), money(y.kept.after_tax_cash_flow),
-                                 money(y.kept.after_tax_cash_flow * interest::pf(rate, y.kept.year))};
-    if (aged) row.insert(row.begin() + 1, std::to_string(age + y.kept.year));
-    kept.add_row(std::move(row));
-    sold.add_row({k, money(y.sale.market_value), money(y.sold.depreciation),
-                  money(y.sale.book_value), money(y.sale.gain), money(y.sale.tax),
-                  money(y.sale.net_proceeds), money(y.sold.after_tax_cash_flow)});
-  }
-  return fmt::format(
-      "{0}: after-tax cash flows of each year kept past its end (what the owner receives; a cost "
-      "is negative)\n{1}\n{0}: if sold at the end of the year (that year takes the disposal-year "
-      "deduction)\n{2}",
-      who, kept.render(), sold.render());
+  return formats::cash_flow_tables(who, table,
+                                   {.age_at_start = age_column(age), .present_worth_rate = rate});
 }
 
 std::string euac_by_life(const std::string& title, const replacement::AssetAnalysis& a,
                          Basis basis, Years age) {
-  const bool aged = age > 0;
-  std::vector<std::string> headers{"years kept", "PW of cost, " + basis_words(basis),
-                                   "EUAC before tax", "marginal cost before tax"};
-  if (aged) headers.insert(headers.begin() + 1, "age at end");
-  if (a.after_tax) headers.insert(headers.end(), {"EUAC after tax", "marginal cost after tax"});
-  TextTable t(headers);
-  const replacement::BasisAnalysis& on = a.on(basis);
-  const replacement::LifeCurve& before = a.before_tax.curve;
-  for (std::size_t n = 0; n < before.euac.size(); ++n) {
-    const auto kept = static_cast<Years>(n + 1);
-    std::vector<std::string> row{std::to_string(kept), money(on.costs.pw_cost(kept)),
-                                 marked(before.euac[n], kept == before.best_years),
-                                 money(before.marginal_costs[n])};
-    if (aged) row.insert(row.begin() + 1, std::to_string(age + kept));
-    if (a.after_tax) {
-      const replacement::LifeCurve& after = a.after_tax->curve;
-      row.push_back(marked(after.euac[n], kept == after.best_years));
-      row.push_back(money(after.marginal_costs[n]));
-    }
-    t.add_row(std::move(row));
-  }
-  return section(title, t.render() +
+  return section(title, formats::life_curve_table(
+                            a, {.age_at_start = age_column(age), .pw_cost_basis = basis}) +
                             "  EUAC(n) = PW of cost(n) x (A/P, i, n); marginal cost(k) = "
                             "(PW(k) - PW(k-1)) x (F/P, i, k)\n");
 }

@@ -3,6 +3,7 @@
 
 #include <cmath>
 
+#include "formats/analysis_json.h"
 #include "formats/caution.h"
 #include "formats/depreciation_json.h"
 #include "interest/factors.h"
@@ -11,57 +12,10 @@ namespace tenure::explain {
 namespace {
 
 using nlohmann::json;
-using replacement::Basis;
 
 template <class T>
 json optional_value(const std::optional<T>& value) {
   return value ? json(*value) : json(nullptr);
-}
-
-json curve(const replacement::BasisAnalysis& analysis, const char* best_key) {
-  const replacement::LifeCurve& c = analysis.curve;
-  json points = json::array();
-  for (std::size_t n = 0; n < c.euac.size(); ++n) {
-    const auto years = static_cast<Years>(n + 1);
-    points.push_back({{"years", years},
-                      {"euac", c.euac[n]},
-                      {"pw_cost", analysis.costs.pw_cost(years)}});
-  }
-  return {{best_key, c.best_years},
-          {"euac", c.best_euac},
-          {"rate", analysis.costs.rate()},
-          {"curve", std::move(points)},
-          {"marginal_costs", c.marginal_costs}};
-}
-
-json cash_flows(const replacement::AfterTaxTable& table, Rate rate) {
-  json rows = json::array();
-  for (const replacement::AfterTaxYear& y : table.years) {
-    rows.push_back({{"year", y.kept.year},
-                    {"operating_cost", y.kept.operating_cost},
-                    {"depreciation", y.kept.depreciation},
-                    {"book_value", y.kept.book_value},
-                    {"taxable_income", y.kept.taxable_income},
-                    {"income_tax", y.kept.income_tax},
-                    {"after_tax_cash_flow", y.kept.after_tax_cash_flow},
-                    {"present_worth", y.kept.after_tax_cash_flow * interest::pf(rate, y.kept.year)},
-                    {"if_sold",
-                     {{"market_value", y.sale.market_value},
-                      {"depreciation", y.sold.depreciation},
-                      {"book_value", y.sale.book_value},
-                      {"gain", y.sale.gain},
-                      {"disposal_tax", y.sale.tax},
-                      {"net_proceeds", y.sale.net_proceeds},
-                      {"after_tax_cash_flow", y.sold.after_tax_cash_flow}}}});
-  }
-  return rows;
-}
-
-json analysis(const replacement::AssetAnalysis& a, const char* best_key, Rate rate) {
-  json out = {{"before_tax", curve(a.before_tax, best_key)}};
-  if (a.after_tax) out["after_tax"] = curve(*a.after_tax, best_key);
-  out["cash_flows"] = cash_flows(a.table, rate);
-  return out;
 }
 
 json inputs(const Explanation& e) {
@@ -229,18 +183,15 @@ json explanation_to_json(const Explanation& e) {
               {"class", class_json(e)},
               {"cost_history", cost_history(e)}};
   if (e.review.defender && e.model.challenger) {
-    const Rate rate = e.basis_rate();
     const replacement::Ownership& own = e.review.inputs.ownership;
-    json defender = analysis(*e.review.defender, "best_years", rate);
+    const formats::JsonAuditFigures audit{.present_worth_rate = e.basis_rate(), .pw_cost = true};
+    json defender = formats::asset_analysis_to_json(*e.review.defender, "best_years", audit);
     defender["future"] = {{"operating_costs", own.operating_costs},
                           {"market_values", own.market_values}};
-    const tax::SaleFlow& now = e.review.defender->table.start;
-    defender["opportunity_cost"] = {{"market_value_now", now.market_value},
-                                    {"book_value_now", now.book_value},
-                                    {"tax_on_sale_now", now.tax},
-                                    {"after_tax", now.net_proceeds}};
+    defender["opportunity_cost"] =
+        formats::opportunity_cost_to_json(e.review.defender->table.start);
     out["defender"] = std::move(defender);
-    out["challenger"] = analysis(*e.model.challenger, "esl_years", rate);
+    out["challenger"] = formats::asset_analysis_to_json(*e.model.challenger, "esl_years", audit);
     out["timing"] = timing(e);
     out["equivalent_case"] = equivalent_case(e);
   }

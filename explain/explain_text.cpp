@@ -34,12 +34,6 @@ std::string depreciation_words(const depreciation::Spec& spec) {
   return out;
 }
 
-std::string basis_words(replacement::Basis basis) {
-  return basis == replacement::Basis::after_tax ? "after-tax" : "before-tax";
-}
-
-std::string marked(Money amount, bool best) { return money(amount) + (best ? " *" : "  "); }
-
 namespace {
 
 std::string ratio(double value) { return fmt::format("{:.4f}", value); }

@@ -6,6 +6,7 @@
 
 #include "depreciation/method.h"
 #include "explain/explanation.h"
+#include "formats/analysis_tables.h"
 
 namespace tenure::explain::text {
 
@@ -13,10 +14,9 @@ namespace tenure::explain::text {
 std::string section(const std::string& title, const std::string& body);
 // "macrs, recovery_years 7" from the depreciation object of the policy.
 std::string depreciation_words(const depreciation::Spec& spec);
-// "after-tax" or "before-tax".
-std::string basis_words(replacement::Basis basis);
-// A money figure with " *" when it is the best point, two spaces otherwise (columns align).
-std::string marked(Money amount, bool best);
+// basis_words ("after-tax") and marked (" *" on a curve's best point), from analysis_tables.h.
+using formats::basis_words;
+using formats::marked;
 
 std::string inputs(const Explanation& e);
 std::string rates_and_money(const Explanation& e);

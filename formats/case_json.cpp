@@ -5,6 +5,7 @@
 
 #include "core/checks.h"
 #include "core/errors.h"
+#include "formats/analysis_json.h"
 #include "formats/depreciation_json.h"
 #include "formats/json_path.h"
 #include "formats/json_text.h"
@@ -70,50 +71,6 @@ Ownership read_defender(const JsonObject& asset) {
   return owned;
 }
 
-// One life curve on one basis. `best_key` is "esl_years" for a challenger, "best_years" for a
-// defender (SPEC 5).
-json curve_to_json(const replacement::BasisAnalysis& analysis, const char* best_key) {
-  const replacement::LifeCurve& curve = analysis.curve;
-  json points = json::array();
-  for (std::size_t n = 0; n < curve.euac.size(); ++n) {
-    points.push_back({{"years", n + 1}, {"euac", curve.euac[n]}});
-  }
-  return {{best_key, curve.best_years},
-          {"euac", curve.best_euac},
-          {"curve", std::move(points)},
-          {"marginal_costs", curve.marginal_costs}};
-}
-
-json cash_flows_to_json(const replacement::AfterTaxTable& table) {
-  json rows = json::array();
-  for (const replacement::AfterTaxYear& year : table.years) {
-    const tax::YearFlow& kept = year.kept;
-    rows.push_back({{"year", kept.year},
-                    {"operating_cost", kept.operating_cost},
-                    {"depreciation", kept.depreciation},
-                    {"book_value", kept.book_value},
-                    {"taxable_income", kept.taxable_income},
-                    {"income_tax", kept.income_tax},
-                    {"after_tax_cash_flow", kept.after_tax_cash_flow},
-                    {"if_sold",
-                     {{"market_value", year.sale.market_value},
-                      {"depreciation", year.sold.depreciation},
-                      {"book_value", year.sale.book_value},
-                      {"gain", year.sale.gain},
-                      {"disposal_tax", year.sale.tax},
-                      {"net_proceeds", year.sale.net_proceeds},
-                      {"after_tax_cash_flow", year.sold.after_tax_cash_flow}}}});
-  }
-  return rows;
-}
-
-json asset_to_json(const replacement::AssetAnalysis& asset, const char* best_key) {
-  json out = {{"before_tax", curve_to_json(asset.before_tax, best_key)}};
-  if (asset.after_tax) out["after_tax"] = curve_to_json(*asset.after_tax, best_key);
-  out["cash_flows"] = cash_flows_to_json(asset.table);
-  return out;
-}
-
 json decision_to_json(const replacement::Decision& decision, const review::VerdictFinding& finding) {
   json timing = json::array();
   for (std::size_t k = 0; k < decision.timing.present_worth.size(); ++k) {
@@ -175,14 +132,10 @@ json case_result_to_json(const replacement::CaseResult& result, const tax::Rates
                 {"income_tax_rate", rates.income_tax_rate},
                 {"after_tax_marr", rates.after_tax_marr},
                 {"capital_gains_tax_rate", rates.capital_gains_tax_rate}}},
-              {"challenger", asset_to_json(result.challenger, "esl_years")}};
+              {"challenger", asset_analysis_to_json(result.challenger, "esl_years")}};
   if (result.defender) {
-    json defender = asset_to_json(*result.defender, "best_years");
-    const tax::SaleFlow& now = result.defender->table.start;
-    defender["opportunity_cost"] = {{"market_value_now", now.market_value},
-                                    {"book_value_now", now.book_value},
-                                    {"tax_on_sale_now", now.tax},
-                                    {"after_tax", now.net_proceeds}};
+    json defender = asset_analysis_to_json(*result.defender, "best_years");
+    defender["opportunity_cost"] = opportunity_cost_to_json(result.defender->table.start);
     out["defender"] = std::move(defender);
   }
   if (result.decision) out["decision"] = decision_to_json(*result.decision, case_finding(result));

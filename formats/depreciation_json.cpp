@@ -58,12 +58,6 @@ struct SpecWriter {
   nlohmann::json operator()(const NoDepreciationSpec&) const { return {{"method", "none"}}; }
 };
 
-std::string method_names() {
-  std::vector<std::string_view> names;
-  for (const DepreciationForm& form : kForms) names.push_back(form.method);
-  return fmt::format("{}", fmt::join(names, ", "));
-}
-
 }  // namespace
 
 const std::vector<DepreciationForm>& depreciation_forms() { return kForms; }
@@ -75,13 +69,19 @@ const DepreciationForm* find_depreciation_form(std::string_view method) {
   return nullptr;
 }
 
+std::string depreciation_method_names() {
+  std::vector<std::string_view> names;
+  for (const DepreciationForm& form : kForms) names.push_back(form.method);
+  return fmt::format("{}", fmt::join(names, ", "));
+}
+
 Spec read_depreciation(const JsonObject& object) {
   const std::string method = object.string("method");
   const DepreciationForm* form = find_depreciation_form(method);
   if (form == nullptr) {
-    throw InputError(
-        object.path_of("method"),
-        fmt::format("unknown method '{}' (expected one of {})", method, method_names()));
+    throw InputError(object.path_of("method"),
+                     fmt::format("unknown method '{}' (expected one of {})", method,
+                                 depreciation_method_names()));
   }
   std::vector<std::string_view> keys{"method"};
   keys.insert(keys.end(), form->fields.begin(), form->fields.end());

@@ -38,6 +38,10 @@ const std::vector<DepreciationForm>& depreciation_forms();
 // The form of `method`, or null when there is none.
 const DepreciationForm* find_depreciation_form(std::string_view method);
 
+// The names of depreciation_forms() in their order, for messages and help texts:
+// "straight_line, declining_balance, sum_of_years_digits, macrs, none".
+std::string depreciation_method_names();
+
 // Reads a depreciation object. Checks types, unknown and missing fields, and whole years; the
 // ranges of the values are the method's to check (see make_checked_method).
 depreciation::Spec read_depreciation(const JsonObject& object);

@@ -5,37 +5,11 @@
 
 #include <fmt/format.h>
 
-#include "core/errors.h"
 #include "formats/caution.h"
 #include "formats/depreciation_json.h"
 #include "formats/text_table.h"
 
 namespace tenure::formats {
-namespace {
-
-struct Row {
-  Years year;
-  Money depreciation;
-  Money book_value;
-};
-
-std::vector<Row> rows_of(const depreciation::Schedule& schedule,
-                         std::optional<Years> disposal_year) {
-  if (disposal_year && *disposal_year < 1) throw InputError("disposal_year", "must be >= 1");
-  const Years last = disposal_year.value_or(schedule.years());
-  std::vector<Row> rows;
-  for (Years year = 1; year <= last; ++year) {
-    if (year == disposal_year) {
-      rows.push_back({year, schedule.deduction_if_sold(year), schedule.book_value_if_sold(year)});
-    } else {
-      rows.push_back({year, schedule.deduction(year), schedule.book_value(year)});
-    }
-  }
-  return rows;
-}
-
-}  // namespace
-
 nlohmann::json schedule_to_json(const depreciation::Spec& spec,
                                 const depreciation::Schedule& schedule,
                                 std::optional<Years> disposal_year) {
@@ -43,7 +17,7 @@ nlohmann::json schedule_to_json(const depreciation::Spec& spec,
   out["basis"] = schedule.basis();
   if (disposal_year) out["disposal_year"] = *disposal_year;
   nlohmann::json rows = nlohmann::json::array();
-  for (const Row& row : rows_of(schedule, disposal_year)) {
+  for (const depreciation::ScheduleRow& row : schedule.rows(disposal_year)) {
     rows.push_back(
         {{"year", row.year}, {"depreciation", row.depreciation}, {"book_value", row.book_value}});
   }
@@ -64,7 +38,7 @@ std::string schedule_to_table(const depreciation::Spec& spec,
   if (!described.empty()) out += fmt::format(" ({})", fmt::join(described, ", "));
   out += fmt::format(", basis {}\n", money(schedule.basis()));
   TextTable table({"year", "depreciation", "book value"});
-  for (const Row& row : rows_of(schedule, disposal_year)) {
+  for (const depreciation::ScheduleRow& row : schedule.rows(disposal_year)) {
     table.add_row({std::to_string(row.year), money(row.depreciation), money(row.book_value)});
   }
   out += table.render();

@@ -43,7 +43,7 @@ const Signature kMacrsRate{"tenure_macrs_rate", {"recovery_years", "year"}};
 void book_value_function(sqlite3_context* context, int argc, sqlite3_value** argv) {
   guarded(context, kBookValue, [&] {
     const Arguments args(kBookValue, argc, argv);
-    const depreciation::Schedule schedule = schedule_from(args);
+    const depreciation::Schedule schedule = schedule_from(args).schedule;
     const Years year = formats::whole_years(args.number("year"), "year", 0);
     sqlite3_result_double(context, schedule.book_value(year));
   });

@@ -1,82 +1,59 @@
-// SQL arguments to a depreciation schedule (see depreciation_arguments.h). The arguments are put
-// into a case file's depreciation object and read by formats/, so the two cannot drift apart.
+// SQL arguments to a depreciation schedule (see depreciation_arguments.h). The arguments become
+// formats/ flat parameters of the same names, so the rules are those of `tenure schedule`; only
+// the words of a refusal are SQL's.
 #include "plugin/depreciation_arguments.h"
 
-#include <algorithm>
+#include <optional>
 #include <string>
 
 #include <fmt/format.h>
-#include <nlohmann/json.hpp>
-
-#include "formats/depreciation_json.h"
-#include "formats/json_path.h"
 
 namespace tenure::plugin {
 namespace {
 
-std::string method_names() {
-  std::vector<std::string_view> names;
-  for (const formats::DepreciationForm& form : formats::depreciation_forms()) {
-    names.push_back(form.method);
-  }
-  return fmt::format("{}", fmt::join(names, ", "));
+std::optional<bool> optional_flag(const Arguments& args, std::string_view name) {
+  const std::optional<double> value = args.optional_number(name);
+  if (!value) return std::nullopt;
+  if (*value != 0 && *value != 1) throw InputError(std::string(name), "must be 0 or 1");
+  return *value == 1;
 }
 
-bool uses(const formats::DepreciationForm& form, std::string_view field) {
-  return std::find(form.fields.begin(), form.fields.end(), field) != form.fields.end();
-}
-
-void require_unused(const Arguments& args, std::string_view name, std::string_view method) {
-  if (args.given(name)) {
-    throw InputError(std::string(name), fmt::format("is not used by method {}", method));
-  }
-}
-
-bool flag(const Arguments& args, std::string_view name) {
-  const double value = args.number(name);
-  if (value != 0 && value != 1) throw InputError(std::string(name), "must be 0 or 1");
-  return value == 1;
+// SQL's words for an argument that does not fit the method: one the method takes is refused as
+// any required number is; one it does not use must be NULL or left out (a salvage may be 0).
+formats::MisfitRefusals sql_refusals(const Arguments& args) {
+  return {[&args](std::string_view parameter, std::string_view) {
+            return args.number_not_given(parameter);
+          },
+          [](std::string_view parameter, std::string_view method,
+             const std::vector<std::string_view>&) {
+            if (parameter == "salvage") {
+              return InputError("salvage", fmt::format("must be 0 or NULL for method {}", method));
+            }
+            return InputError(std::string(parameter),
+                              fmt::format("is not used by method {}", method));
+          }};
 }
 
 }  // namespace
 
-depreciation::Schedule schedule_from(const Arguments& args) {
-  const std::string method = args.text("method");
-  const formats::DepreciationForm* form = formats::find_depreciation_form(method);
-  if (form == nullptr) {
-    throw InputError("", fmt::format("unknown method '{}' (expected one of {})", method,
-                                     method_names()));
+formats::FlatSchedule schedule_from(const Arguments& args) {
+  formats::FlatDepreciation flat{
+      .method = args.text("method"),
+      .basis = args.optional_number("basis"),
+      .salvage = args.optional_number("salvage"),
+      .life = args.optional_number("life"),
+      .rate = args.optional_number("rate"),
+      .switch_to_straight_line = optional_flag(args, "switch_to_straight_line")};
+  if (args.signature().position("dispose_in_year")) {
+    flat.disposal_year = args.optional_number("dispose_in_year");
   }
-  const Money basis = args.number("basis");
-  nlohmann::json object = {{"method", method}};
-
-  if (uses(*form, "salvage")) {
-    object["salvage"] = args.number("salvage");
-  } else if (args.given("salvage") && args.number("salvage") != 0) {
-    // MACRS recovers the whole basis; a salvage would be silently ignored, so refuse it.
-    throw InputError("salvage", fmt::format("must be 0 or NULL for method {}", method));
+  try {
+    return formats::flat_schedule(flat, sql_refusals(args));
+  } catch (const InputError& error) {
+    // An unknown method is a rule about the call as a whole, as tenure_factor's unknown kind.
+    if (error.where() == "method") throw InputError("", error.rule());
+    throw;
   }
-  if (uses(*form, "life_years")) {
-    object["life_years"] = args.number("life");
-  } else if (uses(*form, "recovery_years")) {
-    object["recovery_years"] = args.number("life");
-  } else {
-    require_unused(args, "life", method);
-  }
-  if (uses(*form, "rate")) {
-    object["rate"] = args.number("rate");
-  } else {
-    require_unused(args, "rate", method);
-  }
-  if (uses(*form, "switch_to_straight_line")) {
-    object["switch_to_straight_line"] = flag(args, "switch_to_straight_line");
-  } else {
-    require_unused(args, "switch_to_straight_line", method);
-  }
-
-  const depreciation::Spec spec = formats::read_depreciation(formats::JsonObject(object, "$"));
-  const auto made = depreciation::make_method(spec);
-  return depreciation::Schedule(*made, basis);
 }
 
 }  // namespace tenure::plugin

@@ -1,6 +1,7 @@
 // The depreciation method of a SQL call, shared by tenure_depreciation and tenure_book_value: the
-// arguments method, basis, salvage, life, rate and switch_to_straight_line become a depreciation
-// schedule, through the case file's depreciation reader, so SQL accepts what a case file accepts.
+// arguments method, basis, salvage, life, rate, switch_to_straight_line (and dispose_in_year)
+// become a depreciation schedule through formats/flat_depreciation.h, the reader `tenure
+// schedule` uses too, so SQL accepts what a case file and the command line accept.
 //
 //   method                 straight_line, declining_balance, sum_of_years_digits, macrs, none
 //   basis                  > 0, always required
@@ -11,26 +12,28 @@
 //   rate                   declining_balance only: multiple of the straight-line rate (2 = double)
 //   switch_to_straight_line  declining_balance only: 1 to switch when straight line deducts
 //                          more, 0 never to switch
+//   dispose_in_year        tenure_depreciation only: sold at the end of this year (whole, >= 1)
 // An argument a method does not use must be NULL or left out ("... is not used by method macrs").
 //
 //   const Signature s{"tenure_book_value", {"method", "basis", ...}, kDepreciationAliases};
-//   depreciation::Schedule schedule = schedule_from(Arguments(s, argc, argv));
+//   depreciation::Schedule schedule = schedule_from(Arguments(s, argc, argv)).schedule;
 #pragma once
 
 #include <string_view>
 #include <utility>
 #include <vector>
 
-#include "depreciation/schedule.h"
+#include "formats/flat_depreciation.h"
 #include "plugin/sql_arguments.h"
 
 namespace tenure::plugin {
 
-// Engine field names and the SQL arguments they are about.
+// Flat parameter names and the SQL arguments they are about.
 inline const std::vector<std::pair<std::string_view, std::string_view>> kDepreciationAliases = {
-    {"life_years", "life"}, {"recovery_years", "life"}, {"disposal_year", "dispose_in_year"}};
+    {"disposal_year", "dispose_in_year"}};
 
-// The schedule the arguments describe; throws InputError naming the argument and the rule.
-depreciation::Schedule schedule_from(const Arguments& args);
+// The schedule the arguments describe, with its disposal year when the function has a
+// dispose_in_year argument; throws InputError naming the argument and the rule.
+formats::FlatSchedule schedule_from(const Arguments& args);
 
 }  // namespace tenure::plugin

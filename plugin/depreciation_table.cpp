@@ -41,10 +41,8 @@
 #include <array>
 #include <memory>
 #include <new>
-#include <optional>
 #include <vector>
 
-#include "formats/json_path.h"
 #include "plugin/depreciation_arguments.h"
 #include "plugin/functions.h"
 
@@ -60,36 +58,16 @@ const Signature kDepreciation{"tenure_depreciation",
                                "switch_to_straight_line", "dispose_in_year"},
                               kDepreciationAliases};
 
-struct Row {
-  Years year;
-  Money depreciation;
-  Money book_value;
-};
-
 struct ValueFree {
   void operator()(sqlite3_value* value) const { sqlite3_value_free(value); }
 };
 using OwnedValue = std::unique_ptr<sqlite3_value, ValueFree>;
 
 struct Cursor : sqlite3_vtab_cursor {
-  std::vector<Row> rows;
+  std::vector<depreciation::ScheduleRow> rows;
   std::size_t at = 0;
   std::array<OwnedValue, kInputCount> inputs;  // copies of the arguments, for xColumn
 };
-
-std::vector<Row> rows_of(const depreciation::Schedule& schedule, std::optional<Years> disposal) {
-  const Years last = disposal.value_or(schedule.years());
-  std::vector<Row> rows;
-  rows.reserve(static_cast<std::size_t>(last));
-  for (Years year = 1; year <= last; ++year) {
-    if (year == disposal) {
-      rows.push_back({year, schedule.deduction_if_sold(year), schedule.book_value_if_sold(year)});
-    } else {
-      rows.push_back({year, schedule.deduction(year), schedule.book_value(year)});
-    }
-  }
-  return rows;
-}
 
 int connect_table(sqlite3* db, void*, int, const char* const*, sqlite3_vtab** table, char**) {
   const int rc = sqlite3_declare_vtab(
@@ -183,12 +161,8 @@ int filter(sqlite3_vtab_cursor* base, int mask, const char*, int argc, sqlite3_v
       if (!cursor->inputs[input]) throw std::bad_alloc();
       args.set(input, value);
     }
-    const depreciation::Schedule schedule = schedule_from(args);
-    std::optional<Years> disposal;
-    if (const auto year = args.optional_number("dispose_in_year")) {
-      disposal = formats::whole_years(*year, "dispose_in_year", 1);
-    }
-    cursor->rows = rows_of(schedule, disposal);
+    const formats::FlatSchedule flat = schedule_from(args);
+    cursor->rows = flat.schedule.rows(flat.disposal_year);
     return SQLITE_OK;
   } catch (...) {
     return filter_error(base->pVtab, std::current_exception());
@@ -207,7 +181,7 @@ int at_end(sqlite3_vtab_cursor* base) {
 
 int column_value(sqlite3_vtab_cursor* base, sqlite3_context* context, int column) {
   const auto* cursor = static_cast<Cursor*>(base);
-  const Row& row = cursor->rows[cursor->at];
+  const depreciation::ScheduleRow& row = cursor->rows[cursor->at];
   switch (column) {
     case kYearColumn: sqlite3_result_int64(context, row.year); break;
     case kDepreciationColumn: sqlite3_result_double(context, row.depreciation); break;

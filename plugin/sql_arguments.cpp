@@ -80,6 +80,10 @@ std::optional<double> Arguments::optional_number(std::string_view name) const {
   return number(name);
 }
 
+InputError Arguments::number_not_given(std::string_view name) const {
+  return InputError(std::string(name), value(name) == nullptr ? "is missing" : "must be a number");
+}
+
 std::string Arguments::text(std::string_view name) const {
   sqlite3_value* v = present(name);
   const int type = sqlite3_value_type(v);

@@ -70,6 +70,9 @@ class Arguments {
   double number(std::string_view name) const;
   // The same, or nullopt when absent or NULL.
   std::optional<double> optional_number(std::string_view name) const;
+  // The error number(name) throws for an argument that was not given: "is missing" when it was
+  // left out, "must be a number" when NULL.
+  InputError number_not_given(std::string_view name) const;
   // Text, or a BLOB taken as UTF-8 text (the sqlite3 shell's readfile() returns one): "must be
   // text" when NULL or a number, "is missing" when absent.
   std::string text(std::string_view name) const;

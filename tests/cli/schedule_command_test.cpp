@@ -48,6 +48,18 @@ TEST(ScheduleCommand, StraightLineAndSumOfYearsDigits) {
   EXPECT_NEAR(nlohmann::json::parse(syd.out)["rows"][0]["depreciation"].get<double>(), 5000, 1e-9);
 }
 
+TEST(ScheduleCommand, MacrsTakesAZeroSalvageAsSqlDoes) {
+  // MACRS recovers the whole basis: a salvage of 0 says nothing, any other is refused.
+  const testing::Run zero = run_tenure({"schedule", "--method", "macrs", "--life", "5", "--salvage",
+                                        "0", "--basis", "10000", "--format", "json"});
+  ASSERT_EQ(zero.exit_code, 0) << zero.err;
+  EXPECT_EQ(nlohmann::json::parse(zero.out)["rows"].size(), 6u);
+  const testing::Run some = run_tenure(
+      {"schedule", "--method", "macrs", "--life", "5", "--salvage", "500", "--basis", "10000"});
+  EXPECT_EQ(some.exit_code, 2);
+  EXPECT_EQ(some.err, "tenure schedule: --salvage: not used by method macrs (it takes --life)\n");
+}
+
 // Bad arguments: exit 2, nothing on stdout, exactly `message` on stderr.
 void expect_bad(std::initializer_list<std::string> args, const std::string& message) {
   const testing::Run run = run_tenure(args);

@@ -5,6 +5,7 @@
 
 #include <limits>
 
+#include "depreciation/macrs.h"
 #include "depreciation/no_depreciation.h"
 #include "depreciation/straight_line.h"
 #include "depreciation/sum_of_years_digits.h"
@@ -74,6 +75,36 @@ TEST(ScheduleChecks, YearMustNotBeNegative) {
 TEST(ScheduleChecks, SalvageAboveBasisIsReportedFromTheMethod) {
   EXPECT_TRUE(throws_input_error([] { Schedule(StraightLine(StraightLineSpec{3, 5000}), 3000); },
                                  "salvage", "must not exceed the basis"));
+}
+
+TEST(ScheduleRows, RunToTheLastYearWithFullDeductions) {
+  // Closed form, SYD over 4 years of 1000: 400, 300, 200, 100.
+  const std::vector<ScheduleRow> rows =
+      Schedule(SumOfYearsDigits(SumOfYearsDigitsSpec{4, 0}), 1000).rows();
+  ASSERT_EQ(rows.size(), 4u);
+  EXPECT_EQ(rows[0].year, 1);
+  EXPECT_NEAR(rows[0].depreciation, 400, kMoneyTolerance);
+  EXPECT_NEAR(rows[0].book_value, 600, kMoneyTolerance);
+  EXPECT_EQ(rows[3].year, 4);
+  EXPECT_NEAR(rows[3].book_value, 0, kMoneyTolerance);
+}
+
+TEST(ScheduleRows, StopAtTheDisposalYearWhichTakesTheDisposalRule) {
+  const Schedule s(Macrs(MacrsSpec{5}), 10000);
+  const std::vector<ScheduleRow> rows = s.rows(3);
+  ASSERT_EQ(rows.size(), 3u);
+  // IRS Publication 946, Table A-1, 5-year: 20.00%, 32.00%, then half of year 3's 19.20% (SPEC 6).
+  EXPECT_NEAR(rows[1].depreciation, 3200, kMoneyTolerance);
+  EXPECT_NEAR(rows[1].book_value, 4800, kMoneyTolerance);
+  EXPECT_NEAR(rows[2].depreciation, 960, kMoneyTolerance);
+  EXPECT_NEAR(rows[2].book_value, 3840, kMoneyTolerance);
+  // Past the schedule's end the rows go on with nothing more to deduct.
+  const std::vector<ScheduleRow> late =
+      Schedule(StraightLine(StraightLineSpec{2, 0}), 1000).rows(4);
+  ASSERT_EQ(late.size(), 4u);
+  EXPECT_EQ(late[3].depreciation, 0);
+  EXPECT_EQ(late[3].book_value, 0);
+  EXPECT_TRUE(throws_input_error([&] { s.rows(0); }, "disposal_year", "must be >= 1"));
 }
 
 }  // namespace

@@ -136,5 +136,10 @@ TEST(DepreciationJson, FormsListEveryMethodOnce) {
   EXPECT_EQ(find_depreciation_form("nope"), nullptr);
 }
 
+TEST(DepreciationJson, MethodNamesFollowTheForms) {
+  EXPECT_EQ(depreciation_method_names(),
+            "straight_line, declining_balance, sum_of_years_digits, macrs, none");
+}
+
 }  // namespace
 }  // namespace tenure::formats

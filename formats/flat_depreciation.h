@@ -1,0 +1,82 @@
+// Depreciation from flat parameters, as a command line or an SQL call gives them, made into a
+// checked schedule: the one reader of them for `tenure schedule` (cli/schedule_command.cpp) and
+// the SQL functions tenure_depreciation and tenure_book_value (plugin/depreciation_arguments.cpp).
+// The parameters go into a case file's depreciation object and through read_depreciation, so
+// they accept exactly what a case file accepts.
+//
+//   FlatDepreciation flat{.method = "macrs", .basis = 10000, .life = 5, .disposal_year = 3};
+//   FlatSchedule s = flat_schedule(flat, refusals);
+//   s.spec;                              // MacrsSpec{5}
+//   s.schedule.rows(s.disposal_year);    // years 1..3; year 3 takes half of its 19.20%
+//
+// Every InputError's `where` is a flat parameter's name (below), which the caller maps to its
+// own ("life" is `--life` on the command line, the 4th argument in SQL). The rules:
+//   (1) method is one of depreciation_method_names(), else at "method": "unknown method 'x'
+//       (expected one of straight_line, ...)".
+//   (2) A parameter the method takes must be given; refusals.missing says so. basis is taken by
+//       every method; straight_line and sum_of_years_digits take life and salvage;
+//       declining_balance life, rate, salvage and switch_to_straight_line; macrs life (its
+//       recovery period); none nothing more.
+//   (3) A parameter the method does not take must not be given; refusals.unused says so. A
+//       salvage of 0 counts as not given: macrs and none recover the whole basis, so a zero
+//       salvage says nothing they would ignore.
+//   (4) The values are checked as a case file's: life whole years >= 1 (macrs: 3, 5, 7, 10, 15
+//       or 20), rate > 0, salvage >= 0 and not above the basis, basis > 0.
+//   (5) disposal_year, when given, is a whole year >= 1.
+// Rules (2) and (3) are checked parameter by parameter in the order of FlatDepreciation.
+#pragma once
+
+#include <functional>
+#include <optional>
+#include <string>
+#include <string_view>
+#include <vector>
+
+#include "core/errors.h"
+#include "core/types.h"
+#include "depreciation/method.h"
+#include "depreciation/schedule.h"
+
+namespace tenure::formats {
+
+// The flat parameters by their names; nullopt is "not given".
+struct FlatDepreciation {
+  std::string method;
+  std::optional<Money> basis = std::nullopt;
+  std::optional<Money> salvage = std::nullopt;
+  std::optional<double> life = std::nullopt;  // years; for macrs the recovery period
+  std::optional<double> rate = std::nullopt;  // multiple of the straight-line rate (2 = double)
+  std::optional<bool> switch_to_straight_line = std::nullopt;
+  std::optional<double> disposal_year = std::nullopt;  // sold at the end of this year
+};
+
+// How the caller refuses a parameter that does not fit the method (rules 2 and 3). The command
+// line and the SQL functions word these two refusals differently, and the tests of both pin
+// their words, so the words are the caller's:
+//   tenure schedule: --salvage: required by method straight_line
+//                    --rate: not used by method straight_line (it takes --life, --salvage)
+//   tenure_depreciation: 3rd argument (salvage) is missing      ("must be a number" when NULL)
+//                        5th argument (rate) is not used by method macrs
+//                        3rd argument (salvage) must be 0 or NULL for method macrs
+// Each returns the error to throw, at the flat parameter's name.
+struct MisfitRefusals {
+  // `parameter`, which `method` takes, was not given.
+  std::function<InputError(std::string_view parameter, std::string_view method)> missing;
+  // `parameter` was given, and `method` takes only `taken` (in the method's order; maybe none).
+  std::function<InputError(std::string_view parameter, std::string_view method,
+                           const std::vector<std::string_view>& taken)>
+      unused;
+};
+
+// The schedule the parameters describe, with the spec it was made from and the disposal year.
+struct FlatSchedule {
+  depreciation::Spec spec;
+  depreciation::Schedule schedule;
+  std::optional<Years> disposal_year;
+};
+
+// Applies rules (1) to (5) in that order; throws InputError at the name of the parameter that
+// breaks one.
+FlatSchedule flat_schedule(const FlatDepreciation& flat, const MisfitRefusals& refusals);
+
+}  // namespace tenure::formats
