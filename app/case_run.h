@@ -5,14 +5,13 @@
 //   std::string tables = case_result_tables(text);
 #pragma once
 
+#include <nlohmann/json.hpp>
 #include <string>
 #include <string_view>
 
-#include <nlohmann/json.hpp>
-
 namespace tenure::app {
 
-// Throw InputError naming the JSON path of a bad field.
+// Both throw InputError naming the JSON path of a bad field.
 nlohmann::json case_result_json(std::string_view case_json);
 std::string case_result_tables(std::string_view case_json);
 

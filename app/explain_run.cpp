@@ -18,8 +18,8 @@ explain::Explanation explain_stored_asset(db::Connection& db, std::string_view a
   }
   auto stored_class = db::read_class_result(db, run.run_id, asset->asset_class);
   if (!stored_class) {
-    throw RuntimeFailure(fmt::format("run {} has no row for class '{}'", run.run_id,
-                                     asset->asset_class));
+    throw RuntimeFailure(
+        fmt::format("run {} has no row for class '{}'", run.run_id, asset->asset_class));
   }
   auto policy = explain::run_policy(run);
   auto input = db::read_input_asset(db, policy->sources, asset_id);

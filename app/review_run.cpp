@@ -1,11 +1,11 @@
 // The nightly review on one connection (see review_run.h).
 #include "app/review_run.h"
 
-#include <chrono>
-#include <optional>
-
 #include <fmt/chrono.h>
 #include <fmt/format.h>
+
+#include <chrono>
+#include <optional>
 
 #include "app/sha256.h"
 #include "core/errors.h"
@@ -53,8 +53,9 @@ void doing(const char* what, Step&& step) {
 std::string policy_text_of(db::Connection& db, const ReviewOptions& options) {
   if (options.policy_json) return *options.policy_json;
   if (auto stored = db::latest_policy(db)) return std::move(*stored);
-  throw InputError("policy", "no policy given and none stored in the database (store one "
-                             "with 'tenure policy set')");
+  throw InputError("policy",
+                   "no policy given and none stored in the database (store one "
+                   "with 'tenure policy set')");
 }
 
 results::RunRow run_row(const Date& as_of, std::string started_at, std::string policy_text,
@@ -114,9 +115,9 @@ RunSummary run_review(db::Connection& db, const ReviewOptions& options) {
     doing(kStoring, [&] {
       tx.emplace(db, db::Transaction::Kind::immediate);
       db::migrate(db);
-      writer.emplace(db, run_row(as_of, std::move(started_at), std::move(policy_text), policy,
-                                 result, report),
-                     data, result);
+      writer.emplace(
+          db, run_row(as_of, std::move(started_at), std::move(policy_text), policy, result, report),
+          data, result);
     });
     review::analyse_assets(data, policy, result, options.progress,
                            [&](std::span<const review::AssetReview> done) {
@@ -137,9 +138,15 @@ RunSummary run_review(db::Connection& db, const ReviewOptions& options) {
   summary.assets_reviewed = static_cast<std::int64_t>(result.assets.size());
   for (const review::AssetReview& a : result.assets) {
     switch (a.finding.verdict) {
-      case review::Verdict::keep: ++summary.keep; break;
-      case review::Verdict::review: ++summary.review; break;
-      case review::Verdict::replace: ++summary.replace; break;
+      case review::Verdict::keep:
+        ++summary.keep;
+        break;
+      case review::Verdict::review:
+        ++summary.review;
+        break;
+      case review::Verdict::replace:
+        ++summary.replace;
+        break;
     }
   }
   summary.due = summary.review + summary.replace;

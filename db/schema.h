@@ -1,6 +1,9 @@
 // The results schema tenure keeps beside the host's tables (SPEC 7). Every object's name starts
-// with tenure_; migrations are numbered and applied in order inside the caller's transaction, and
-// tenure_schema_version records each one, so a newer tenure upgrades an older database in place.
+// with tenure_. The tables are generated from their column lists (results/tables.h); a schema
+// version is the columns some `since` names, applied inside the caller's transaction (a new
+// database gets every column at once, an older one ALTER TABLE ... ADD COLUMN for the newer ones,
+// then its views made again), and tenure_schema_version records each version, so a newer tenure
+// upgrades an older database in place.
 //
 //   sqlite> SELECT asset_id, verdict, reason FROM tenure_due LIMIT 1;
 //   PU-0042|review|Review: at 12 years it is at or past the class's economic life of 10 years; ...

@@ -15,12 +15,12 @@
 //   //   ...
 #pragma once
 
+#include <fmt/format.h>
+
 #include <cstdint>
 #include <optional>
 #include <string>
 #include <vector>
-
-#include <fmt/format.h>
 
 #include "core/errors.h"
 #include "db/connection.h"
@@ -83,9 +83,10 @@ Row read_row(const Statement& q, const results::Table<Row>& table) {
   int index = 0;
   for (const results::Column<Row>& c : table.columns) {
     if (!c.set(row, column_value(q, index))) {
-      throw RuntimeFailure(fmt::format("{}.{}: the stored value '{}' does not read as this "
-                                       "build of tenure stores it",
-                                       table.name, c.name, q.text(index)));
+      throw RuntimeFailure(
+          fmt::format("{}.{}: the stored value '{}' does not read as this "
+                      "build of tenure stores it",
+                      table.name, c.name, q.text(index)));
     }
     ++index;
   }

@@ -131,8 +131,7 @@ constexpr Column<typename detail::MemberOf<decltype(Member)>::Row> column(
     std::string_view name, std::string_view sql_type, ColumnOptions options = {}) {
   using Row = typename detail::MemberOf<decltype(Member)>::Row;
   return {name, sql_type, [](const Row& row) { return detail::encode(row.*Member); },
-          [](Row& row, const Value& value) { return detail::decode(value, row.*Member); },
-          options};
+          [](Row& row, const Value& value) { return detail::decode(value, row.*Member); }, options};
 }
 
 }  // namespace tenure::results

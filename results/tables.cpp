@@ -98,8 +98,7 @@ constexpr Column<CurveRow> kCurveColumns[] = {
 constexpr Column<CashFlowRow> kCashFlowColumns[] = {
     column<&CashFlowRow::asset_class>("asset_class", "TEXT NOT NULL"),
     column<&CashFlowRow::asset_id>("asset_id", "TEXT", {.note = "NULL for the class challenger"}),
-    column<&CashFlowRow::role>("role",
-                               "TEXT NOT NULL CHECK (role IN ('challenger', 'defender'))"),
+    column<&CashFlowRow::role>("role", "TEXT NOT NULL CHECK (role IN ('challenger', 'defender'))"),
     column<&CashFlowRow::year>("year", "INTEGER NOT NULL", {.note = "years kept"}),
     column<&CashFlowRow::operating_cost>("operating_cost", "REAL NOT NULL"),
     column<&CashFlowRow::depreciation>("depreciation", "REAL NOT NULL"),
@@ -120,7 +119,8 @@ constexpr Column<RejectedRow> kRejectedColumns[] = {
     column<&RejectedRow::reason>("reason", "TEXT NOT NULL"),
 };
 
-constexpr Index kCurveIndexes[] = {{"tenure_euac_curve_by_asset", "(run_id, asset_class, asset_id)"}};
+constexpr Index kCurveIndexes[] = {
+    {"tenure_euac_curve_by_asset", "(run_id, asset_class, asset_id)"}};
 constexpr Index kCashFlowIndexes[] = {
     {"tenure_cash_flow_by_asset", "(run_id, asset_class, asset_id)"}};
 constexpr Index kRejectedIndexes[] = {{"tenure_rejected_by_run", "(run_id)"}};
@@ -144,14 +144,14 @@ const Table<RunRow>& run_table() {
 }
 
 const Table<ClassRow>& class_table() {
-  static const Table<ClassRow> table{"tenure_class_result", true, kClassColumns,
-                                     "PRIMARY KEY (run_id, asset_class)", {}};
+  static const Table<ClassRow> table{
+      "tenure_class_result", true, kClassColumns, "PRIMARY KEY (run_id, asset_class)", {}};
   return table;
 }
 
 const Table<AssetRow>& asset_table() {
-  static const Table<AssetRow> table{"tenure_asset_result", true, kAssetColumns,
-                                     "PRIMARY KEY (run_id, asset_id)", {}};
+  static const Table<AssetRow> table{
+      "tenure_asset_result", true, kAssetColumns, "PRIMARY KEY (run_id, asset_id)", {}};
   return table;
 }
 
@@ -161,14 +161,14 @@ const Table<CurveRow>& curve_table() {
 }
 
 const Table<CashFlowRow>& cash_flow_table() {
-  static const Table<CashFlowRow> table{"tenure_cash_flow", true, kCashFlowColumns, {},
-                                        kCashFlowIndexes};
+  static const Table<CashFlowRow> table{
+      "tenure_cash_flow", true, kCashFlowColumns, {}, kCashFlowIndexes};
   return table;
 }
 
 const Table<RejectedRow>& rejected_table() {
-  static const Table<RejectedRow> table{"tenure_rejected", true, kRejectedColumns, {},
-                                        kRejectedIndexes};
+  static const Table<RejectedRow> table{
+      "tenure_rejected", true, kRejectedColumns, {}, kRejectedIndexes};
   return table;
 }
 

@@ -31,12 +31,12 @@ struct Table {
   std::span<const Index> indexes;
 };
 
-const Table<RunRow>& run_table();              // tenure_run
-const Table<ClassRow>& class_table();          // tenure_class_result
-const Table<AssetRow>& asset_table();          // tenure_asset_result
-const Table<CurveRow>& curve_table();          // tenure_euac_curve
-const Table<CashFlowRow>& cash_flow_table();   // tenure_cash_flow
-const Table<RejectedRow>& rejected_table();    // tenure_rejected
+const Table<RunRow>& run_table();             // tenure_run
+const Table<ClassRow>& class_table();         // tenure_class_result
+const Table<AssetRow>& asset_table();         // tenure_asset_result
+const Table<CurveRow>& curve_table();         // tenure_euac_curve
+const Table<CashFlowRow>& cash_flow_table();  // tenure_cash_flow
+const Table<RejectedRow>& rejected_table();   // tenure_rejected
 
 // The newest schema version any column names (ColumnOptions::since).
 int newest_column_version();

@@ -21,8 +21,9 @@ const char* to_string(Verdict verdict) {
 
 VerdictFigures figures_of(const replacement::Decision& d, Money marginal_cost_next_year,
                           Years last_year_weighed) {
-  return {d.basis,          d.timing.keep_years, last_year_weighed,      d.defender_euac,
-          d.defender_best_years, d.challenger_euac, d.challenger_esl, marginal_cost_next_year};
+  return {d.basis,          d.timing.keep_years,    last_year_weighed,
+          d.defender_euac,  d.defender_best_years,  d.challenger_euac,
+          d.challenger_esl, marginal_cost_next_year};
 }
 
 VerdictFinding nightly_verdict(const VerdictFigures& figures, Years age, double review_margin) {

@@ -6,7 +6,7 @@
 //   VerdictFinding f = nightly_verdict(figures_of(decision, marginal_next, last_year), age, 0.05);
 //   f.verdict;      // Verdict::review
 //   f.decided_by;   // VerdictTest::past_economic_life
-//   f.reason;       // "Review: at 9 years it is at or past the class's economic life of 7 years; ..."
+//   f.reason;       // "Review: at 9 years it is at or past the class's economic life of ..."
 //
 // Rules (cited by the code):
 //   (0) An asset whose class cannot be weighed (no cost curve, so no challenger) is under review,
@@ -43,11 +43,11 @@ enum class VerdictTest {
 // What the rule weighs, all on the decision's basis.
 struct VerdictFigures {
   replacement::Basis basis;
-  Years keep_years;               // k*
-  Years last_year_weighed;        // the defender's last year weighed
-  Money defender_euac;            // D
+  Years keep_years;         // k*
+  Years last_year_weighed;  // the defender's last year weighed
+  Money defender_euac;      // D
   Years defender_best_years;
-  Money challenger_euac;          // C
+  Money challenger_euac;  // C
   Years challenger_esl;
   Money marginal_cost_next_year;  // the defender's, of its next year
 };

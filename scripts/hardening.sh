@@ -77,7 +77,7 @@ asan() {
 }
 
 threaded_tests=(db_cost_event_scan_test db_cost_ranges_test db_review_run_test
-                db_input_catalogue_test plugin_serialized_host_test)
+                db_input_catalogue_test plugin_serialized_host_test review_analyse_assets_test)
 
 tsan() {
   local t0=$SECONDS

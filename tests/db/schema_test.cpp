@@ -3,6 +3,8 @@
 // and from the schema tenure 0.1.0 created; a database that 0.1.0 created
 // (fixtures/schemas/results_schema_v1.sql) is upgraded in place to the same columns; migrating
 // again changes nothing; and a stored row survives the generated INSERT and SELECT unchanged.
+#include "db/schema.h"
+
 #include <gtest/gtest.h>
 
 #include <fstream>
@@ -10,7 +12,6 @@
 #include <string>
 #include <vector>
 
-#include "db/schema.h"
 #include "db/table_sql.h"
 #include "db_test_support.h"
 #include "results/tables.h"
@@ -40,25 +41,57 @@ std::string fixture_schema_v1() {
   return text.str();
 }
 
-const std::vector<std::string> kAssetResult = {
-    "run_id INTEGER 1 1", "asset_id TEXT 1 2", "asset_class TEXT 1 0", "age_years INTEGER 1 0",
-    "first_cost REAL 1 0", "book_value_now REAL 1 0", "market_value_now REAL 1 0",
-    "market_value_source TEXT 1 0", "cost_years INTEGER 1 0", "cost_ratio REAL 1 0",
-    "credibility_factor REAL 1 0", "class_esl_years INTEGER 0 0",
-    "defender_best_years INTEGER 0 0", "defender_euac REAL 0 0", "challenger_euac REAL 0 0",
-    "defender_euac_before_tax REAL 0 0", "defender_euac_after_tax REAL 0 0",
-    "marginal_cost_next_year REAL 0 0", "replace_after_years INTEGER 0 0",
-    "verdict TEXT 1 0", "reason TEXT 1 0", "basis TEXT 1 0"};
+const std::vector<std::string> kAssetResult = {"run_id INTEGER 1 1",
+                                               "asset_id TEXT 1 2",
+                                               "asset_class TEXT 1 0",
+                                               "age_years INTEGER 1 0",
+                                               "first_cost REAL 1 0",
+                                               "book_value_now REAL 1 0",
+                                               "market_value_now REAL 1 0",
+                                               "market_value_source TEXT 1 0",
+                                               "cost_years INTEGER 1 0",
+                                               "cost_ratio REAL 1 0",
+                                               "credibility_factor REAL 1 0",
+                                               "class_esl_years INTEGER 0 0",
+                                               "defender_best_years INTEGER 0 0",
+                                               "defender_euac REAL 0 0",
+                                               "challenger_euac REAL 0 0",
+                                               "defender_euac_before_tax REAL 0 0",
+                                               "defender_euac_after_tax REAL 0 0",
+                                               "marginal_cost_next_year REAL 0 0",
+                                               "replace_after_years INTEGER 0 0",
+                                               "verdict TEXT 1 0",
+                                               "reason TEXT 1 0",
+                                               "basis TEXT 1 0"};
 
 // SPEC 7's columns of tenure_latest, in its order (views report no types or keys).
-const std::vector<std::string> kLatestSpec = {
-    "run_id", "asset_id", "asset_class", "age_years", "class_esl_years", "defender_euac",
-    "challenger_euac", "marginal_cost_next_year", "replace_after_years", "verdict", "reason",
-    "basis"};
-const std::vector<std::string> kClassLatestSpec = {
-    "run_id", "asset_class", "esl_years_before_tax", "euac_before_tax", "esl_years_after_tax",
-    "euac_after_tax", "cost_model", "cost_a", "cost_g", "cost_r2", "asset_years",
-    "value_model", "value_start", "value_decline", "valuations_used"};
+const std::vector<std::string> kLatestSpec = {"run_id",
+                                              "asset_id",
+                                              "asset_class",
+                                              "age_years",
+                                              "class_esl_years",
+                                              "defender_euac",
+                                              "challenger_euac",
+                                              "marginal_cost_next_year",
+                                              "replace_after_years",
+                                              "verdict",
+                                              "reason",
+                                              "basis"};
+const std::vector<std::string> kClassLatestSpec = {"run_id",
+                                                   "asset_class",
+                                                   "esl_years_before_tax",
+                                                   "euac_before_tax",
+                                                   "esl_years_after_tax",
+                                                   "euac_after_tax",
+                                                   "cost_model",
+                                                   "cost_a",
+                                                   "cost_g",
+                                                   "cost_r2",
+                                                   "asset_years",
+                                                   "value_model",
+                                                   "value_start",
+                                                   "value_decline",
+                                                   "valuations_used"};
 
 std::vector<std::string> names(const std::vector<std::string>& columns) {
   std::vector<std::string> out;
@@ -83,22 +116,20 @@ TEST(Schema, FreshDatabaseHasSpec7TablesAndViews) {
   migrate(db);
   EXPECT_EQ(columns_of(db, "tenure_asset_result"), kAssetResult);
   EXPECT_EQ(columns_of(db, "tenure_rejected"),
-            (std::vector<std::string>{"run_id INTEGER 1 0", "source TEXT 1 0",
-                                      "row_ref TEXT 1 0", "reason TEXT 1 0"}));
-  EXPECT_EQ(names(columns_of(db, "tenure_run")),
-            (std::vector<std::string>{"run_id", "as_of", "started_at", "finished_at",
-                                      "policy_json", "policy_sha256", "rows_read",
-                                      "rows_rejected", "status", "basis", "money",
-                                      "assets_reviewed", "assets_retired",
-                                      "assets_not_yet_in_service", "rows_after_as_of",
-                                      "tenure_version"}));
+            (std::vector<std::string>{"run_id INTEGER 1 0", "source TEXT 1 0", "row_ref TEXT 1 0",
+                                      "reason TEXT 1 0"}));
+  EXPECT_EQ(
+      names(columns_of(db, "tenure_run")),
+      (std::vector<std::string>{
+          "run_id", "as_of", "started_at", "finished_at", "policy_json", "policy_sha256",
+          "rows_read", "rows_rejected", "status", "basis", "money", "assets_reviewed",
+          "assets_retired", "assets_not_yet_in_service", "rows_after_as_of", "tenure_version"}));
   for (const char* view : {"tenure_latest", "tenure_due", "tenure_newly_due"}) {
     SCOPED_TRACE(view);
     expect_starts_with(names(columns_of(db, view)), kLatestSpec);
   }
   expect_starts_with(names(columns_of(db, "tenure_class_latest")), kClassLatestSpec);
-  EXPECT_EQ(scalar(db, "SELECT max(version) FROM tenure_schema_version"),
-            current_schema_version());
+  EXPECT_EQ(scalar(db, "SELECT max(version) FROM tenure_schema_version"), current_schema_version());
 }
 
 TEST(Schema, DatabaseOfVersionOneIsUpgradedInPlace) {
@@ -106,9 +137,10 @@ TEST(Schema, DatabaseOfVersionOneIsUpgradedInPlace) {
   Connection fresh = fresh_file.open();
   migrate(fresh);
   Connection old = old_file.open();
-  old.exec("CREATE TABLE tenure_schema_version(version INTEGER PRIMARY KEY, applied_at TEXT NOT "
-           "NULL DEFAULT (strftime('%Y-%m-%dT%H:%M:%SZ','now'))); "
-           "INSERT INTO tenure_schema_version(version) VALUES (1);");
+  old.exec(
+      "CREATE TABLE tenure_schema_version(version INTEGER PRIMARY KEY, applied_at TEXT NOT "
+      "NULL DEFAULT (strftime('%Y-%m-%dT%H:%M:%SZ','now'))); "
+      "INSERT INTO tenure_schema_version(version) VALUES (1);");
   old.exec(fixture_schema_v1());
   {
     Transaction tx(old, Transaction::Kind::immediate);
@@ -172,8 +204,9 @@ TEST(TableSql, AStoredRowReadsBackUnchanged) {
   EXPECT_EQ(back.replace_after_years, 0);
   EXPECT_EQ(back.verdict, review::Verdict::replace);
   EXPECT_EQ(back.basis, replacement::Basis::before_tax);
-  EXPECT_EQ(scalar(db, "SELECT count(*) FROM tenure_asset_result WHERE verdict = 'replace' AND "
-                       "basis = 'before_tax' AND challenger_euac IS NULL"),
+  EXPECT_EQ(scalar(db,
+                   "SELECT count(*) FROM tenure_asset_result WHERE verdict = 'replace' AND "
+                   "basis = 'before_tax' AND challenger_euac IS NULL"),
             1);
 }
 
@@ -181,8 +214,9 @@ TEST(TableSql, AStoredWordThisBuildDoesNotKnowIsNamed) {
   TempDatabase file;
   Connection db = file.open();
   migrate(db);
-  db.exec("INSERT INTO tenure_euac_curve(run_id, asset_class, role, basis, years, euac, "
-          "marginal_cost) VALUES (1, 'vans', 'challenger', 'sideways', 1, 10, 10)");
+  db.exec(
+      "INSERT INTO tenure_euac_curve(run_id, asset_class, role, basis, years, euac, "
+      "marginal_cost) VALUES (1, 'vans', 'challenger', 'sideways', 1, 10, 10)");
   Statement q(db, select_sql(results::curve_table()));
   ASSERT_TRUE(q.step());
   try {

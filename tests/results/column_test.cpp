@@ -35,8 +35,15 @@ constexpr Column<Sample> kModel = column<&Sample::model>("model", "TEXT");
 constexpr Column<Sample> kFlag = column<&Sample::flag>("flag", "INTEGER NOT NULL");
 
 TEST(Column, WritesEachFieldAsItsStorageClass) {
-  Sample s{42, 7, 12.5, "PU-0001", std::nullopt, "a note", review::Verdict::replace,
-           fleet::CostModel::geometric, true};
+  Sample s{42,
+           7,
+           12.5,
+           "PU-0001",
+           std::nullopt,
+           "a note",
+           review::Verdict::replace,
+           fleet::CostModel::geometric,
+           true};
   EXPECT_EQ(kCount.get(s), Value(std::int64_t{42}));
   EXPECT_EQ(kYears.get(s), Value(std::int64_t{7}));
   EXPECT_EQ(kAmount.get(s), Value(12.5));
@@ -49,12 +56,12 @@ TEST(Column, WritesEachFieldAsItsStorageClass) {
 }
 
 TEST(Column, ReadsBackWhatItWrote) {
-  const Sample s{-3, 12, -0.125, "x", 1e15, std::nullopt, review::Verdict::review,
+  const Sample s{-3,           12,   -0.125, "x", 1e15, std::nullopt, review::Verdict::review,
                  std::nullopt, false};
-  Sample back{1, 1, 1, "y", std::nullopt, "old", review::Verdict::keep,
-              fleet::CostModel::linear, true};
-  for (const Column<Sample>* c : {&kCount, &kYears, &kAmount, &kText, &kMaybe, &kNote, &kVerdict,
-                                  &kModel, &kFlag}) {
+  Sample back{1,   1, 1, "y", std::nullopt, "old", review::Verdict::keep, fleet::CostModel::linear,
+              true};
+  for (const Column<Sample>* c :
+       {&kCount, &kYears, &kAmount, &kText, &kMaybe, &kNote, &kVerdict, &kModel, &kFlag}) {
     SCOPED_TRACE(std::string(c->name));
     EXPECT_TRUE(c->set(back, c->get(s)));
   }
@@ -71,14 +78,14 @@ TEST(Column, ReadsBackWhatItWrote) {
 
 TEST(Column, RefusesWhatDoesNotFit) {
   Sample s;
-  EXPECT_FALSE(kVerdict.set(s, std::string_view("maybe")));   // not one of the words
-  EXPECT_FALSE(kVerdict.set(s, Value()));                      // NULL in a required field
-  EXPECT_FALSE(kCount.set(s, 1.5));                            // a REAL in an INTEGER field
+  EXPECT_FALSE(kVerdict.set(s, std::string_view("maybe")));  // not one of the words
+  EXPECT_FALSE(kVerdict.set(s, Value()));                    // NULL in a required field
+  EXPECT_FALSE(kCount.set(s, 1.5));                          // a REAL in an INTEGER field
   EXPECT_FALSE(kText.set(s, std::int64_t{3}));
   EXPECT_FALSE(kModel.set(s, std::string_view("cubic")));
-  EXPECT_TRUE(kAmount.set(s, std::int64_t{3}));                // an integral REAL reads as one
+  EXPECT_TRUE(kAmount.set(s, std::int64_t{3}));  // an integral REAL reads as one
   EXPECT_EQ(s.amount, 3.0);
-  EXPECT_TRUE(kModel.set(s, Value()));                          // NULL in an optional field
+  EXPECT_TRUE(kModel.set(s, Value()));  // NULL in an optional field
   EXPECT_FALSE(s.model);
 }
 

@@ -2,13 +2,14 @@
 // with each test's figures, for the nightly review and for a case file, and the reasons' wording.
 // The figures are invented round numbers; each row's expected verdict follows from the rule's
 // numbered clauses by hand.
+#include "review/verdict_rule.h"
+
 #include <gtest/gtest.h>
 
 #include <string>
 #include <vector>
 
 #include "review/verdict_reasons.h"
-#include "review/verdict_rule.h"
 
 namespace tenure::review {
 namespace {
@@ -35,8 +36,8 @@ class NightlyVerdict : public ::testing::TestWithParam<NightlyRow> {};
 TEST_P(NightlyVerdict, FollowsTheRuleInOrder) {
   const NightlyRow& row = GetParam();
   SCOPED_TRACE(row.what);
-  const VerdictFinding f = nightly_verdict(figures(row.k_star, row.d, row.c, row.esl), row.age,
-                                           row.margin);
+  const VerdictFinding f =
+      nightly_verdict(figures(row.k_star, row.d, row.c, row.esl), row.age, row.margin);
   EXPECT_EQ(f.verdict, row.verdict);
   EXPECT_EQ(f.decided_by, row.decided_by);
   EXPECT_EQ(f.due(), row.verdict != Verdict::keep);
