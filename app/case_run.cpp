@@ -9,12 +9,12 @@ namespace tenure::app {
 
 nlohmann::json case_result_json(std::string_view case_json) {
   const replacement::Case input = formats::read_case(case_json);
-  return formats::case_result_to_json(replacement::analyse(input), input.rates);
+  return formats::case_result_to_json(input, replacement::analyse(input));
 }
 
 std::string case_result_tables(std::string_view case_json) {
   const replacement::Case input = formats::read_case(case_json);
-  return formats::case_result_to_table(replacement::analyse(input), input.rates);
+  return formats::case_result_to_table(input, replacement::analyse(input));
 }
 
 }  // namespace tenure::app

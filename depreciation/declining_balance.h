@@ -22,6 +22,11 @@ class DecliningBalance : public Method {
   std::string_view name() const override { return "declining_balance"; }
   // Throws InputError("salvage", "must not exceed the basis") when salvage > basis.
   std::vector<Money> deductions(Money basis) const override;
+  std::shared_ptr<const Method> scaled(double factor) const override {
+    DecliningBalanceSpec spec = spec_;
+    spec.salvage *= factor;
+    return std::make_shared<DecliningBalance>(spec);
+  }
 
  private:
   DecliningBalanceSpec spec_;

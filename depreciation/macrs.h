@@ -33,6 +33,10 @@ class Macrs : public Method {
   std::vector<Money> deductions(Money basis) const override;
   // 0.5 before year R + 1 (rule 4), 1.0 from year R + 1 on.
   double disposal_year_fraction(Years year) const override;
+  // MACRS holds no amount: the same method.
+  std::shared_ptr<const Method> scaled(double) const override {
+    return std::make_shared<Macrs>(*this);
+  }
 
  private:
   Years recovery_years_;

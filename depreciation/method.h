@@ -31,6 +31,11 @@ class Method {
     (void)year;
     return 1.0;
   }
+  // The same method for a unit whose price is `factor` (> 0) times as large: every amount the
+  // method holds (a salvage value) times `factor`, its lives and rates as they are. So the
+  // deductions of scaled(f) on f x basis are f times those of this method on basis; the
+  // break-even price (replacement/break_even.h) rests on it.
+  virtual std::shared_ptr<const Method> scaled(double factor) const = 0;
 };
 
 // Parameters of each method, as in a case file's depreciation object (SPEC 5). Each method's

@@ -13,6 +13,9 @@ class NoDepreciation : public Method {
   std::string_view name() const override { return "none"; }
   // Always empty: no year has a deduction.
   std::vector<Money> deductions(Money basis) const override;
+  std::shared_ptr<const Method> scaled(double) const override {
+    return std::make_shared<NoDepreciation>();
+  }
 };
 
 }  // namespace tenure::depreciation

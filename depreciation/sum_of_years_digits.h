@@ -18,6 +18,10 @@ class SumOfYearsDigits : public Method {
   std::string_view name() const override { return "sum_of_years_digits"; }
   // Throws InputError("salvage", "must not exceed the basis") when salvage > basis.
   std::vector<Money> deductions(Money basis) const override;
+  std::shared_ptr<const Method> scaled(double factor) const override {
+    return std::make_shared<SumOfYearsDigits>(
+        SumOfYearsDigitsSpec{spec_.life_years, spec_.salvage * factor});
+  }
 
  private:
   SumOfYearsDigitsSpec spec_;

@@ -4,6 +4,7 @@
 #include <cmath>
 
 #include "formats/analysis_json.h"
+#include "formats/at_stake_output.h"
 #include "formats/caution.h"
 #include "formats/depreciation_json.h"
 #include "interest/factors.h"
@@ -41,6 +42,7 @@ json rates(const Explanation& e) {
           {"after_tax_marr", p.rates.after_tax_marr},
           {"capital_gains_tax_rate", p.rates.capital_gains_tax_rate},
           {"cost_escalation", p.cost_escalation},
+          {"lead_time_years", p.lead_time_years},
           {"review_margin", p.review_margin},
           {"money", p.real_money() ? "real" : "nominal"},
           {"basis", replacement::to_string(e.review.basis)},
@@ -139,7 +141,9 @@ json verdict(const Explanation& e) {
           {"challenger_euac", d ? json(d->challenger_euac) : json(nullptr)},
           {"class_esl_years", optional_value(r.class_esl_years)},
           {"marginal_cost_next_year", optional_value(r.marginal_cost_next_year)},
-          {"review_margin", e.policy->review_margin}};
+          {"lead_time_years", e.policy->lead_time_years},
+          {"review_margin", e.policy->review_margin},
+          {"at_stake", r.at_stake ? formats::at_stake_to_json(*r.at_stake) : json(nullptr)}};
 }
 
 json ownership(const replacement::Ownership& own, const depreciation::Spec& spec) {
@@ -163,6 +167,8 @@ json equivalent_case(const Explanation& e) {
           {"income_tax_rate", r.income_tax_rate},
           {"after_tax_marr", r.after_tax_marr},
           {"capital_gains_tax_rate", r.capital_gains_tax_rate},
+          {"lead_time_years", e.policy->lead_time_years},
+          {"review_margin", e.policy->review_margin},
           {"challenger", ownership(*e.model.challenger_input, spec)},
           {"defender", std::move(defender)}};
 }

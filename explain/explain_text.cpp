@@ -95,7 +95,10 @@ std::string rates_and_money(const Explanation& e) {
              "on a sale above the original first cost"});
   t.add_row({"cost escalation", percent(p.cost_escalation),
              "per year, restating past costs into as-of money"});
-  t.add_row({"review margin", percent(p.review_margin), "|D - C| <= margin x C puts it under review"});
+  t.add_row({"lead time", years(p.lead_time_years),
+             "a replacement this near is to be budgeted or ordered now: review"});
+  t.add_row({"review margin", percent(p.review_margin),
+             "a break-even price this near the price is a close call"});
   t.add_row({"money", p.real_money() ? "real" : "nominal",
              p.real_money() ? "costs restated to " + e.run.as_of +
                                   " money, so the MARR is a real rate (no inflation in it)"
@@ -209,19 +212,18 @@ std::string own_costs(const Explanation& e) {
 
 std::string verdict_rule(const Explanation& e) {
   const review::VerdictFinding& f = e.review.finding;
-  std::string body = review::nightly_rule_in_words();
-  if (f.figures && f.age) {
+  std::string body = review::rule_in_words();
+  if (f.figures) {
     const review::VerdictFigures& d = *f.figures;
     const auto holds = [](bool test) { return test ? "yes" : "no"; };
     TextTable t({"test", "figures", "holds"}, 2);
     t.add_row({"k* = 0", fmt::format("k* = {}", d.keep_years), holds(d.keep_years == 0)});
     t.add_row({"age >= economic life",
-               fmt::format("{} against {}", years(*f.age), years(d.challenger_esl)),
+               fmt::format("{} against {}", years(f.age), years(d.challenger_esl)),
                holds(f.past_economic_life)});
-    t.add_row({"|D - C| <= margin x C",
-               fmt::format("|{} - {}| = {} against {}", money(d.defender_euac),
-                           money(d.challenger_euac), money(f.gap), money(f.allowed)),
-               holds(f.close_to_challenger)});
+    t.add_row({"k* <= lead time",
+               fmt::format("k* = {} against lead_time_years {}", d.keep_years, f.lead_time_years),
+               holds(f.within_lead_time)});
     body += t.render();
   }
   body += fmt::format("  verdict: {}\n  {}\n", review::to_string(f.verdict), f.reason);
@@ -234,16 +236,7 @@ namespace {
 
 std::string headline(const Explanation& e) {
   const review::AssetReview& r = e.review;
-  std::string verdict;
-  switch (r.finding.verdict) {
-    case review::Verdict::replace: verdict = "REPLACE now"; break;
-    case review::Verdict::review: verdict = "REVIEW"; break;
-    case review::Verdict::keep: verdict = "KEEP"; break;
-  }
-  if (r.decision && r.decision->timing.keep_years > 0) {
-    verdict += fmt::format(" (cheapest: replace after {} more)",
-                           formats::years(r.decision->timing.keep_years));
-  }
+  const std::string verdict = review::verdict_headline(r.finding);
   std::string out = fmt::format(
       "tenure explain: asset {} (class {}), run {} as of {}\n\nVerdict: {}, {} basis\n  {}\n",
       e.stored.asset_id, e.stored.asset_class, e.run.run_id, e.run.as_of, verdict,
@@ -281,6 +274,7 @@ std::string explanation_to_text(const Explanation& e) {
     sections.push_back(text::section("5-10. Analysis", "  not possible: " + e.model.note + "\n"));
   }
   sections.push_back(text::verdict_rule(e));
+  if (e.review.at_stake) sections.push_back(text::at_stake(e));
   sections.push_back(std::string(formats::kCaution) + "\n");
   return fmt::format("{}", fmt::join(sections, "\n"));
 }

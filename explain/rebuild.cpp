@@ -102,6 +102,16 @@ std::vector<std::string> differences(const results::AssetRow& stored,
           again.defender_euac_before_tax);
   compare(out, "defender_euac_after_tax", stored.defender_euac_after_tax,
           again.defender_euac_after_tax);
+  const review::AtStake* s = again.at_stake ? &*again.at_stake : nullptr;
+  compare(out, "delay_cost", stored.delay_cost, s ? s->delay_cost : std::nullopt);
+  compare(out, "early_cost", stored.early_cost, s ? std::optional(s->early_cost) : std::nullopt);
+  compare(out, "repair_limit", stored.repair_limit,
+          s ? std::optional(s->repair_limit) : std::nullopt);
+  compare(out, "break_even_price", stored.break_even_price,
+          s ? s->break_even_price : std::nullopt);
+  compare(out, "break_even_cost_factor", stored.break_even_cost_factor,
+          s ? s->break_even_cost_factor : std::nullopt);
+  compare(out, "close_call", stored.close_call, s ? std::optional(s->close_call) : std::nullopt);
   return out;
 }
 

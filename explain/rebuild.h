@@ -37,8 +37,9 @@ review::AssetReview recompute(const results::AssetRow& stored, const review::Cla
 // One line per stored figure the recomputation does not reproduce exactly, e.g.
 // "defender_euac: stored 8482.01 (8482.0100000000002), recomputed 8482.02 (...)". Compared:
 // defender_euac, challenger_euac, marginal_cost_next_year, replace_after_years, verdict, reason,
-// and also book_value_now, class_esl_years, defender_best_years and both before/after-tax
-// defender EUACs.
+// and also book_value_now, class_esl_years, defender_best_years, both before/after-tax defender
+// EUACs and what is at stake (delay_cost, early_cost, repair_limit, both break-evens,
+// close_call).
 std::vector<std::string> differences(const results::AssetRow& stored,
                                      const review::AssetReview& again);
 

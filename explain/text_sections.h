@@ -23,6 +23,8 @@ std::string rates_and_money(const Explanation& e);
 std::string class_curves(const Explanation& e);
 std::string own_costs(const Explanation& e);
 std::string verdict_rule(const Explanation& e);
+// What is at stake, each figure with its formula and the numbers put in it (stake_text.cpp).
+std::string at_stake(const Explanation& e);
 
 // The year-by-year tables (analysis_text.cpp); they need the recomputed defender analysis.
 std::string defender_future(const Explanation& e);

@@ -8,6 +8,7 @@
 #include "formats/analysis_json.h"
 #include "formats/depreciation_json.h"
 #include "formats/json_path.h"
+#include "formats/at_stake_output.h"
 #include "formats/json_text.h"
 
 namespace tenure::formats {
@@ -71,12 +72,13 @@ Ownership read_defender(const JsonObject& asset) {
   return owned;
 }
 
-json decision_to_json(const replacement::Decision& decision, const review::VerdictFinding& finding) {
+json decision_to_json(const replacement::Decision& decision, const review::CaseVerdict& verdict) {
+  const review::VerdictFinding& finding = verdict.finding;
   json timing = json::array();
   for (std::size_t k = 0; k < decision.timing.present_worth.size(); ++k) {
     timing.push_back({{"keep_years", k}, {"present_worth_cost", decision.timing.present_worth[k]}});
   }
-  return {{"basis", replacement::to_string(decision.basis)},
+  json out = {{"basis", replacement::to_string(decision.basis)},
           {"verdict", review::to_string(finding.verdict)},
           {"replace_after_years", decision.timing.keep_years},
           {"reason", finding.reason},
@@ -85,6 +87,8 @@ json decision_to_json(const replacement::Decision& decision, const review::Verdi
           {"defender_euac", decision.defender_euac},
           {"defender_best_years", decision.defender_best_years},
           {"timing", std::move(timing)}};
+  out.update(at_stake_to_json(verdict.at_stake));
+  return out;
 }
 
 json study_period_to_json(const replacement::StudyPeriod& study, replacement::Basis basis) {
@@ -101,18 +105,12 @@ json study_period_to_json(const replacement::StudyPeriod& study, replacement::Ba
 
 }  // namespace
 
-review::VerdictFinding case_finding(const replacement::CaseResult& result) {
-  const replacement::Decision& d = *result.decision;
-  const replacement::BasisAnalysis& defender = result.defender->on(d.basis);
-  return review::case_verdict(
-      review::figures_of(d, defender.curve.marginal_costs[0], defender.costs.max_years()));
-}
-
 replacement::Case read_case(std::string_view json_text) {
   const json document = parse_json_text(json_text);
   const JsonObject root(document, "$");
   root.allow_only({"marr", "income_tax_rate", "after_tax_marr", "capital_gains_tax_rate",
-                   "challenger", "defender", "study_period_years"});
+                   "lead_time_years", "review_margin", "challenger", "defender",
+                   "study_period_years"});
   replacement::Case input{};
   input.rates = tax::Rates::make(root.number("marr"), root.number("income_tax_rate"),
                                  root.optional_number("after_tax_marr"),
@@ -122,10 +120,16 @@ replacement::Case read_case(std::string_view json_text) {
     input.defender = read_defender(*defender);
   }
   input.study_period_years = root.optional_whole_number("study_period_years", 1);
+  input.lead_time_years = root.optional_whole_number("lead_time_years", 0, 100).value_or(1);
+  input.review_margin = root.optional_number("review_margin").value_or(0.05);
+  if (input.review_margin < 0 || input.review_margin >= 1) {
+    throw InputError(root.path_of("review_margin"), "must be in [0, 1)");
+  }
   return input;
 }
 
-json case_result_to_json(const replacement::CaseResult& result, const tax::Rates& rates) {
+json case_result_to_json(const replacement::Case& input, const replacement::CaseResult& result) {
+  const tax::Rates& rates = input.rates;
   json out = {{"basis", replacement::to_string(result.basis)},
               {"rates",
                {{"marr", rates.marr},
@@ -138,7 +142,9 @@ json case_result_to_json(const replacement::CaseResult& result, const tax::Rates
     defender["opportunity_cost"] = opportunity_cost_to_json(result.defender->table.start);
     out["defender"] = std::move(defender);
   }
-  if (result.decision) out["decision"] = decision_to_json(*result.decision, case_finding(result));
+  if (result.decision) {
+    out["decision"] = decision_to_json(*result.decision, review::case_verdict(input, result));
+  }
   if (result.study_period) {
     out["study_period"] = study_period_to_json(*result.study_period, result.basis);
   }

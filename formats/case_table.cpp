@@ -5,8 +5,10 @@
 
 #include "formats/analysis_tables.h"
 #include "formats/case_json.h"
+#include "formats/at_stake_output.h"
 #include "formats/caution.h"
 #include "formats/text_table.h"
+#include "review/verdict_reasons.h"
 
 namespace tenure::formats {
 namespace {
@@ -23,22 +25,20 @@ std::string rates_table(const tax::Rates& rates) {
 }
 
 std::string decision_text(const replacement::Decision& decision,
-                          const review::VerdictFinding& finding) {
+                          const review::CaseVerdict& case_verdict) {
+  const review::VerdictFinding& finding = case_verdict.finding;
   TextTable timing({"keep defender (years)", "present worth of cost"});
   for (std::size_t k = 0; k < decision.timing.present_worth.size(); ++k) {
     timing.add_row(
         {std::to_string(k), marked(decision.timing.present_worth[k],
                                    static_cast<Years>(k) == decision.timing.keep_years)});
   }
-  const std::string verdict =
-      finding.verdict == review::Verdict::replace
-          ? "REPLACE now"
-          : "KEEP for " + years(decision.timing.keep_years) + ", then replace";
   return fmt::format(
       "Replacement timing ({} basis; the challenger repeated at its least EUAC {}; * = best)\n"
-      "{}\nDecision: {}\n  {}\n",
-      basis_words(decision.basis), money(decision.challenger_euac), timing.render(), verdict,
-      finding.reason);
+      "{}\nDecision: {}\n  {}\n\nWhat is at stake ({} basis, present worth now)\n{}",
+      basis_words(decision.basis), money(decision.challenger_euac), timing.render(),
+      review::verdict_headline(finding), finding.reason, basis_words(decision.basis),
+      at_stake_table(case_verdict.at_stake));
 }
 
 std::string study_period_text(const replacement::StudyPeriod& study, Basis basis) {
@@ -54,7 +54,9 @@ std::string study_period_text(const replacement::StudyPeriod& study, Basis basis
 
 }  // namespace
 
-std::string case_result_to_table(const replacement::CaseResult& result, const tax::Rates& rates) {
+std::string case_result_to_table(const replacement::Case& input,
+                                 const replacement::CaseResult& result) {
+  const tax::Rates& rates = input.rates;
   std::vector<std::string> sections;
   sections.push_back(rates_table(rates));
   sections.push_back(fmt::format("Decision basis: {}", basis_words(result.basis)) + "\n");
@@ -70,7 +72,9 @@ std::string case_result_to_table(const replacement::CaseResult& result, const ta
         life_curve_table(*result.defender));
     sections.push_back(cash_flow_tables("Defender", result.defender->table));
   }
-  if (result.decision) sections.push_back(decision_text(*result.decision, case_finding(result)));
+  if (result.decision) {
+    sections.push_back(decision_text(*result.decision, review::case_verdict(input, result)));
+  }
   if (result.study_period) {
     sections.push_back(study_period_text(*result.study_period, result.basis));
   }

@@ -4,7 +4,7 @@
 // with its opportunity cost; the replacement timing; the decision and its reason; the study
 // period; and the caution of SPEC 10 at the end.
 //
-//   std::string text = case_result_to_table(replacement::analyse(c), c.rates);
+//   std::string text = case_result_to_table(c, replacement::analyse(c));
 #pragma once
 
 #include <string>
@@ -14,6 +14,8 @@
 
 namespace tenure::formats {
 
-std::string case_result_to_table(const replacement::CaseResult& result, const tax::Rates& rates);
+// `result` is replacement::analyse(input).
+std::string case_result_to_table(const replacement::Case& input,
+                                 const replacement::CaseResult& result);
 
 }  // namespace tenure::formats

@@ -82,7 +82,8 @@ review::Policy read_policy(std::string_view json_text) {
   const json document = parse_json_text(json_text);
   const JsonObject root(document, "$");
   root.allow_only({"marr", "income_tax_rate", "after_tax_marr", "capital_gains_tax_rate",
-                   "cost_escalation", "review_margin", "sources", "classes", "detail"});
+                   "cost_escalation", "lead_time_years", "review_margin", "esl_band", "sources",
+                   "classes", "detail"});
   review::Policy policy{};
   const double marr = root.number("marr");
   const double tax_rate = root.number("income_tax_rate");
@@ -92,9 +93,15 @@ review::Policy read_policy(std::string_view json_text) {
   if (policy.cost_escalation <= -1 || policy.cost_escalation >= 1) {
     throw InputError(root.path_of("cost_escalation"), "must be in (-1, 1)");
   }
+  policy.lead_time_years =
+      root.optional_whole_number("lead_time_years", 0, kMaxLifeYears).value_or(1);
   policy.review_margin = root.optional_number("review_margin").value_or(0.05);
   if (policy.review_margin < 0 || policy.review_margin >= 1) {
     throw InputError(root.path_of("review_margin"), "must be in [0, 1)");
+  }
+  policy.esl_band = root.optional_number("esl_band").value_or(0.02);
+  if (policy.esl_band < 0 || policy.esl_band >= 1) {
+    throw InputError(root.path_of("esl_band"), "must be in [0, 1)");
   }
   if (const auto sources = root.optional_object("sources")) policy.sources = read_sources(*sources);
   policy.detail = read_detail(root);

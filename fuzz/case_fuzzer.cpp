@@ -21,7 +21,7 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
   try {
     const tenure::replacement::Case input = tenure::formats::read_case(text);
     const auto result = tenure::replacement::analyse(input);
-    const std::string out = tenure::formats::case_result_to_json(result, input.rates).dump();
+    const std::string out = tenure::formats::case_result_to_json(input, result).dump();
     if (out.find("null") != std::string::npos) {
       std::fprintf(stderr, "non-finite number in the case result: %s\n", out.c_str());
       std::abort();

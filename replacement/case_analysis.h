@@ -25,6 +25,9 @@ struct Case {
   Ownership challenger;
   std::optional<Ownership> defender;
   std::optional<Years> study_period_years;
+  // How its verdict is weighed (review/case_verdict.h), as the policy's keys of these names.
+  Years lead_time_years = 1;
+  double review_margin = 0.05;
 };
 
 // One asset's analysis on one basis.

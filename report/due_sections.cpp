@@ -59,9 +59,11 @@ std::string due_list(const PageModel& m) {
   std::string out = fmt::format(
       "<section id=\"due\"><h2>Due: {} assets to review or replace</h2>", m.due.size());
   if (m.due.empty()) return out + "<p>No asset is due in this run.</p></section>";
-  out += "<p>Replace first, then review; within each, the largest yearly excess of keeping over "
-         "a new unit first. EUACs are on the decision basis; <span class=\"new\">new</span> marks "
-         "an asset that was not due in the previous run.</p>";
+  out += "<p>The largest cost of waiting a year first (what replacing a year after the best time "
+         "costs, in present worth). EUACs and costs are on the decision basis; <span "
+         "class=\"new\">new</span> marks an asset that was not due in the previous run, <span "
+         "class=\"close\">close call</span> one whose break-even price is within the review "
+         "margin of a new unit's price.</p>";
   std::string items;
   const std::size_t shown = std::min(m.due.size(), kMaxDueRows);
   for (std::size_t i = 0; i < shown; ++i) {
@@ -70,22 +72,26 @@ std::string due_list(const PageModel& m) {
     // One <tbody> per asset: its figures, then its reason across the whole width.
     items += fmt::format(
         "<tbody class=\"item\"><tr><td class=\"id\">{}{}</td><td class=\"id\">{}</td>"
-        "<td>{}{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td><td class=\"num\">{}"
-        "</td><td class=\"num\">{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td>"
-        "</tr><tr><td></td><td colspan=\"8\" class=\"reason\">{}</td></tr></tbody>",
+        "<td>{}{}{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td><td class=\"num\">"
+        "{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td>"
+        "<td class=\"num\">{}</td><td class=\"num\">{}</td></tr><tr><td></td><td "
+        "colspan=\"10\" class=\"reason\">{}</td></tr></tbody>",
         i < kMaxAssetCharts ? fmt::format("<a href=\"#due-{}\">{}</a>", i, escape(a.asset_id))
                             : escape(a.asset_id),
         due.reproduced ? "" : " <span class=\"badge replace\">CHECK</span>",
         escape(a.asset_class), verdict_badge(a.verdict),
-        due.newly_due ? " <span class=\"new\">new</span>" : "", a.age_years,
-        years_cell(a.class_esl_years), money_cell(a.defender_euac), money_cell(a.challenger_euac),
-        money_cell(a.marginal_cost_next_year), replace_words(a), escape(a.reason));
+        due.newly_due ? " <span class=\"new\">new</span>" : "",
+        a.close_call.value_or(false) ? " <span class=\"close\">close call</span>" : "",
+        a.age_years, years_cell(a.class_esl_years), money_cell(a.defender_euac),
+        money_cell(a.challenger_euac), money_cell(a.marginal_cost_next_year), replace_words(a),
+        money_cell(a.delay_cost), money_cell(a.repair_limit), escape(a.reason));
   }
   out += fmt::format(
       "<table class=\"due\"><thead><tr><th>Asset</th><th>Class</th><th>Verdict</th>"
       "<th class=\"num\">Age</th><th class=\"num\">Economic life</th><th class=\"num\">Least "
       "EUAC if kept</th><th class=\"num\">Least EUAC of a new unit</th><th class=\"num\">Next "
-      "year's marginal cost</th><th class=\"num\">Replace</th></tr></thead>{}</table>",
+      "year's marginal cost</th><th class=\"num\">Replace</th><th class=\"num\">Waiting a "
+      "year costs</th><th class=\"num\">Repair limit</th></tr></thead>{}</table>",
       items);
   if (shown < m.due.size()) {
     out += fmt::format("<p>{} more due assets are not listed here; the view "

@@ -35,7 +35,7 @@ struct PageModel {
   std::map<std::string, review::ClassModel, std::less<>> models;  // by class
   VerdictCounts counts;
   std::map<std::string, VerdictCounts, std::less<>> counts_by_class;
-  std::vector<DueAsset> due;  // replace first, then review; within, the largest excess first
+  std::vector<DueAsset> due;  // results::more_urgent first: the largest cost of waiting a year
   std::size_t newly_due = 0;
 
   bool after_tax() const;

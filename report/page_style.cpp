@@ -56,6 +56,8 @@ td.reason { font-size: 12.5px; color: #34404c; padding-top: 0; }
 .badge.replace { background: #fbe1d3; color: #8a3300; border-color: #D55E00; }
 .new { display: inline-block; font-size: 11px; font-weight: 700; color: #7a2d5a;
   border: 1px dashed #CC79A7; padding: 0 5px; border-radius: 8px; margin-left: 4px; }
+.close { display: inline-block; font-size: 11px; font-weight: 700; color: #004f7c;
+  border: 1px dotted #0072B2; padding: 0 5px; border-radius: 8px; margin-left: 4px; }
 .caution { border: 2px solid #E69F00; background: #fffaf0; padding: 12px 16px; margin: 18px 0;
   font-size: 14px; }
 .caution strong { display: block; margin-bottom: 4px; }

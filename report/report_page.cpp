@@ -14,14 +14,6 @@
 namespace tenure::report {
 namespace {
 
-int urgency(review::Verdict verdict) { return verdict == review::Verdict::replace ? 0 : 1; }
-
-// How much a year of keeping costs over the challenger, on the basis: the list's second key.
-Money excess(const results::AssetRow& a) {
-  if (!a.defender_euac || !a.challenger_euac) return 0;
-  return *a.defender_euac - *a.challenger_euac;
-}
-
 PageModel build_model(const ReportData& data) {
   PageModel m{&data, data.policy, {}, {}, {}, {}, 0};
   for (const results::ClassRow& c : data.classes) {
@@ -41,10 +33,8 @@ PageModel build_model(const ReportData& data) {
     m.newly_due += newly ? 1 : 0;
     m.due.push_back({&a, newly, std::nullopt});
   }
-  std::stable_sort(m.due.begin(), m.due.end(), [](const DueAsset& x, const DueAsset& y) {
-    const int ux = urgency(x.stored->verdict), uy = urgency(y.stored->verdict);
-    if (ux != uy) return ux < uy;
-    return excess(*x.stored) > excess(*y.stored);
+  std::sort(m.due.begin(), m.due.end(), [](const DueAsset& x, const DueAsset& y) {
+    return results::more_urgent(*x.stored, *y.stored);
   });
   // Only the charted assets need their year-by-year figures: recompute those, as explain does.
   for (std::size_t i = 0; i < std::min(m.due.size(), kMaxAssetCharts); ++i) {

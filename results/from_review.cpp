@@ -67,6 +67,15 @@ AssetRow asset_row(const review::AssetReview& r, const review::AssetRecord& reco
     row.marginal_cost_next_year = r.marginal_cost_next_year;
     row.replace_after_years = d.timing.keep_years;
   }
+  if (r.at_stake) {
+    const review::AtStake& s = *r.at_stake;
+    row.delay_cost = s.delay_cost;
+    row.early_cost = s.early_cost;
+    row.repair_limit = s.repair_limit;
+    row.break_even_price = s.break_even_price;
+    row.break_even_cost_factor = s.break_even_cost_factor;
+    row.close_call = s.close_call;
+  }
   row.verdict = r.finding.verdict;
   row.reason = r.finding.reason;
   row.basis = r.basis;

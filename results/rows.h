@@ -101,9 +101,20 @@ struct AssetRow {
   review::Verdict verdict = review::Verdict::review;
   std::string reason;
   replacement::Basis basis = replacement::Basis::after_tax;
+  // What is at stake (SPEC 11, review/at_stake.h); empty when the class could not be weighed.
+  std::optional<Money> delay_cost;
+  std::optional<Money> early_cost;
+  std::optional<Money> repair_limit;
+  std::optional<Money> break_even_price;
+  std::optional<double> break_even_cost_factor;
+  std::optional<bool> close_call;
 
   bool due() const { return verdict != review::Verdict::keep; }
 };
+
+// The order of the morning list (`tenure due`, the report): the largest cost of waiting a year
+// first (none last), then replace before review, then by asset_id.
+bool more_urgent(const AssetRow& a, const AssetRow& b);
 
 // A row of tenure_euac_curve: one point of a stored EUAC curve.
 struct CurveRow {

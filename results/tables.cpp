@@ -83,6 +83,15 @@ constexpr Column<AssetRow> kAssetColumns[] = {
                                "TEXT NOT NULL CHECK (verdict IN ('keep', 'review', 'replace'))"),
     column<&AssetRow::reason>("reason", "TEXT NOT NULL"),
     column<&AssetRow::basis>("basis", "TEXT NOT NULL"),
+    column<&AssetRow::delay_cost>("delay_cost", "REAL", {.since = 2, .in_views = true}),
+    column<&AssetRow::early_cost>("early_cost", "REAL", {.since = 2, .in_views = true}),
+    column<&AssetRow::repair_limit>("repair_limit", "REAL", {.since = 2, .in_views = true}),
+    column<&AssetRow::break_even_price>("break_even_price", "REAL",
+                                        {.since = 2, .in_views = true}),
+    column<&AssetRow::break_even_cost_factor>("break_even_cost_factor", "REAL",
+                                              {.since = 2, .in_views = true}),
+    column<&AssetRow::close_call>("close_call", "INTEGER CHECK (close_call IN (0, 1))",
+                                  {.since = 2, .in_views = true}),
 };
 
 constexpr Column<CurveRow> kCurveColumns[] = {
@@ -137,6 +146,15 @@ int newest_of(std::span<const Column<Row>> columns) {
 const char* to_string(MoneyTerms terms) { return terms == MoneyTerms::real ? "real" : "nominal"; }
 const char* to_string(RunStatus status) { return status == RunStatus::ok ? "ok" : "failed"; }
 const char* to_string(Role role) { return role == Role::challenger ? "challenger" : "defender"; }
+
+bool more_urgent(const AssetRow& a, const AssetRow& b) {
+  if (a.delay_cost.has_value() != b.delay_cost.has_value()) return a.delay_cost.has_value();
+  if (a.delay_cost && *a.delay_cost != *b.delay_cost) return *a.delay_cost > *b.delay_cost;
+  const bool a_now = a.verdict == review::Verdict::replace;
+  const bool b_now = b.verdict == review::Verdict::replace;
+  if (a_now != b_now) return a_now;
+  return a.asset_id < b.asset_id;
+}
 
 const Table<RunRow>& run_table() {
   static const Table<RunRow> table{"tenure_run", false, kRunColumns, {}, {}};

@@ -88,9 +88,10 @@ AssetReview judge(std::size_t asset, DefenderInputs inputs, const ClassModel& mo
   const replacement::BasisAnalysis& on_basis = r.defender->on(r.basis);
   r.marginal_cost_next_year = on_basis.curve.marginal_costs[0];
   r.class_esl_years = d.challenger_esl;
-  r.finding = nightly_verdict(
-      figures_of(d, *r.marginal_cost_next_year, on_basis.costs.max_years()),
-      r.inputs.age_years, policy.review_margin);
+  r.finding = weigh(figures_of(d, *r.marginal_cost_next_year, on_basis.costs.max_years()),
+                    r.inputs.age_years, policy.lead_time_years);
+  r.at_stake = at_stake(d, *r.defender, r.inputs.ownership, model.price_lines,
+                        model.policy->challenger_first_cost, rates, policy.review_margin);
   return r;
 }
 

@@ -15,6 +15,7 @@
 
 #include "fleet/credibility.h"
 #include "replacement/case_analysis.h"
+#include "review/at_stake.h"
 #include "review/class_model.h"
 #include "review/fleet_data.h"
 #include "review/policy.h"
@@ -45,6 +46,7 @@ struct AssetReview {
   // by pointer so a fleet's summaries stay small.
   std::unique_ptr<replacement::AssetAnalysis> defender;
   std::optional<replacement::Decision> decision;
+  std::optional<AtStake> at_stake;       // present with a decision
   std::optional<Years> class_esl_years;  // the class challenger's ESL on the basis
 
   bool due() const { return finding.due(); }

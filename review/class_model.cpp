@@ -23,6 +23,7 @@ ClassModel make_class_model(const std::string& asset_class, const ClassPolicy& p
                    std::move(value_curve),
                    std::nullopt,
                    std::nullopt,
+                   {},
                    {}};
   if (!model.cost_curve) {
     model.note = fmt::format("no complete year of cost history for class '{}', so its costs "
@@ -47,6 +48,9 @@ ClassModel make_class_model(const std::string& asset_class, const ClassPolicy& p
                  "those years are read as zero cost";
   }
   model.challenger = replacement::analyse_asset(challenger, rates);
+  model.price_lines = replacement::price_lines(
+      challenger, *model.challenger, rates,
+      rates.after_tax() ? replacement::Basis::after_tax : replacement::Basis::before_tax);
   model.challenger_input = std::move(challenger);
   return model;
 }

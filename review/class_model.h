@@ -15,6 +15,7 @@
 
 #include "fleet/cost_curve.h"
 #include "fleet/value_curve.h"
+#include "replacement/break_even.h"
 #include "replacement/case_analysis.h"
 #include "review/fleet_data.h"
 #include "review/policy.h"
@@ -30,6 +31,9 @@ struct ClassModel {
   fleet::ValueCurve value_curve;
   std::optional<replacement::Ownership> challenger_input;
   std::optional<replacement::AssetAnalysis> challenger;  // present with a cost curve
+  // The challenger's EUAC(n) against its price on the decision's basis (replacement/break_even.h
+  // rule (2)); empty without a challenger.
+  std::vector<replacement::Line> price_lines;
   std::string note;  // why there is no challenger, or what was assumed; empty when nothing
 
   // Expected operating cost of age-year k for a unit at `factor` times the class level; a curve

@@ -42,7 +42,9 @@ struct Policy {
   tax::Rates rates;
   Detail detail = Detail::none;
   Rate cost_escalation = 0;    // restates past costs into as-of-year money (then marr is real)
-  double review_margin = 0.05; // |D - C| <= margin * C puts an asset under review
+  Years lead_time_years = 1;   // a replacement this near is due now (review/verdict_rule.h (3))
+  double review_margin = 0.05; // a break-even price this near the price is a close call
+  double esl_band = 0.02;      // lives whose EUAC is within this of the least are the band
   Sources sources;
   std::map<std::string, ClassPolicy, std::less<>> classes;
 

@@ -6,68 +6,47 @@
 #include "replacement/reason_text.h"
 
 namespace tenure::review {
-namespace {
 
 using replacement::reason_money;
 using replacement::reason_years;
 
-std::string basis_words(replacement::Basis basis) {
-  return basis == replacement::Basis::after_tax ? "after-tax" : "before-tax";
-}
-
-}  // namespace
-
-std::string nightly_reason(VerdictTest test, const VerdictFigures& f, Years age,
-                           double review_margin) {
-  const std::string basis = basis_words(f.basis);
+std::string verdict_reason(VerdictTest test, const VerdictFigures& f, Years age,
+                           Years lead_time_years) {
+  const std::string basis =
+      f.basis == replacement::Basis::after_tax ? "after-tax" : "before-tax";
+  // "after 3 years more", and "(the last year weighed)" when k* is the end of the years given.
+  const std::string when = fmt::format("after {} more{}", reason_years(f.keep_years),
+                                       f.keep_years == f.last_year_weighed
+                                           ? " (the last year weighed)"
+                                           : "");
+  const std::string euacs =
+      fmt::format("{} EUAC {} against the challenger's {}", basis, reason_money(f.defender_euac),
+                  reason_money(f.challenger_euac));
   switch (test) {
     case VerdictTest::replace_now:
       return fmt::format(
           "Replace: keeping it any longer costs more than a new unit; its least {} EUAC is {} "
-          "against the challenger's {} and next year's marginal cost is {}.",
+          "against the challenger's {}, and next year's marginal cost is {}.",
           basis, reason_money(f.defender_euac), reason_money(f.challenger_euac),
           reason_money(f.marginal_cost_next_year));
     case VerdictTest::past_economic_life:
       return fmt::format(
-          "Review: at {} it is at or past the class's economic life of {}; replacing after {} "
-          "more is cheapest ({} EUAC {} against the challenger's {}).",
-          reason_years(age), reason_years(f.challenger_esl), reason_years(f.keep_years), basis,
-          reason_money(f.defender_euac), reason_money(f.challenger_euac));
-    case VerdictTest::close_to_challenger:
+          "Review: at {} it is at or past a new unit's economic life of {}; replacing {} is "
+          "cheapest ({}).",
+          reason_years(age), reason_years(f.challenger_esl), when, euacs);
+    case VerdictTest::within_lead_time:
       return fmt::format(
-          "Review: its least {} EUAC of {} is within {:g}% of the challenger's {}; replacing "
-          "after {} more is cheapest.",
-          basis, reason_money(f.defender_euac), review_margin * 100,
-          reason_money(f.challenger_euac), reason_years(f.keep_years));
+          "Review: replacing {} is cheapest, within the lead time of {}, so the replacement is "
+          "to be budgeted or ordered now ({}).",
+          when, reason_years(lead_time_years), euacs);
     case VerdictTest::none_held:
     case VerdictTest::cannot_weigh:
       break;
   }
   return fmt::format(
-      "Keep: at {} it is short of the class's economic life of {}; its least {} EUAC is {} "
-      "against the challenger's {}, and replacing after {} more is cheapest.",
-      reason_years(age), reason_years(f.challenger_esl), basis, reason_money(f.defender_euac),
-      reason_money(f.challenger_euac), reason_years(f.keep_years));
-}
-
-std::string case_reason(const VerdictFigures& f) {
-  const std::string basis = basis_words(f.basis);
-  if (f.keep_years == 0) {
-    return fmt::format(
-        "Replace now: on an {} basis the defender's least EUAC is {} (keeping {}) against the "
-        "challenger's {} (economic life {}), and no period of keeping it costs less than "
-        "replacing it at once.",
-        basis, reason_money(f.defender_euac), reason_years(f.defender_best_years),
-        reason_money(f.challenger_euac), reason_years(f.challenger_esl));
-  }
-  const std::string horizon =
-      f.keep_years == f.last_year_weighed ? " (the end of the years given for it)" : "";
-  return fmt::format(
-      "Keep the defender {} more{} and then replace it: on an {} basis its least EUAC is {} "
-      "(keeping {}) against the challenger's {} (economic life {}).",
-      reason_years(f.keep_years), horizon, basis, reason_money(f.defender_euac),
-      reason_years(f.defender_best_years), reason_money(f.challenger_euac),
-      reason_years(f.challenger_esl));
+      "Keep: at {} it is short of a new unit's economic life of {}, and replacing {} is "
+      "cheapest ({}).",
+      reason_years(age), reason_years(f.challenger_esl), when, euacs);
 }
 
 std::string cannot_weigh_reason(std::string_view why) {
@@ -76,10 +55,20 @@ std::string cannot_weigh_reason(std::string_view why) {
       why);
 }
 
-std::string nightly_rule_in_words() {
-  return "  replace when k* = 0; otherwise review when the age is at or past the class's economic "
-         "life,\n  or when |D - C| <= review margin x C; otherwise keep (D, C: least EUACs on the "
-         "basis)\n";
+std::string verdict_headline(const VerdictFinding& f) {
+  std::string words = f.verdict == Verdict::replace  ? "REPLACE now"
+                      : f.verdict == Verdict::review ? "REVIEW"
+                                                     : "KEEP";
+  if (f.figures && f.figures->keep_years > 0) {
+    words += fmt::format(" (cheapest: replace after {} more)", reason_years(f.figures->keep_years));
+  }
+  return words;
+}
+
+std::string rule_in_words() {
+  return "  replace when k* = 0; otherwise review when the age is at or past a new unit's "
+         "economic life,\n  or when k* <= the lead time; otherwise keep (k*: the years to keep "
+         "it before replacing is cheapest)\n";
 }
 
 }  // namespace tenure::review

@@ -3,20 +3,22 @@
 // test's figures and which test decided, so that a reader can print the rule with the numbers
 // put in it; the one-sentence reasons are all in verdict_reasons.h.
 //
-//   VerdictFinding f = nightly_verdict(figures_of(decision, marginal_next, last_year), age, 0.05);
+//   VerdictFinding f = weigh(figures_of(decision, marginal_next, last_year), age, 1);
 //   f.verdict;      // Verdict::review
 //   f.decided_by;   // VerdictTest::past_economic_life
-//   f.reason;       // "Review: at 9 years it is at or past the class's economic life of ..."
+//   f.reason;       // "Review: at 9 years it is at or past a new unit's economic life of ..."
 //
 // Rules (cited by the code):
 //   (0) An asset whose class cannot be weighed (no cost curve, so no challenger) is under review,
 //       the reason saying why.
 //   (1) replace when k* = 0: keeping it any longer costs more than a new unit.
-//   (2) Nightly: otherwise review when its age is at or past the class's economic service life on
-//       the decision's basis.
-//   (3) Nightly: otherwise review when |D - C| <= review_margin x C (D, C: the defender's and the
-//       challenger's least EUACs on the basis).
-//   (4) Otherwise keep. A case file's defender is weighed on (1) alone: keep or replace.
+//   (2) Otherwise review when its age is at or past the challenger's economic service life on
+//       the decision's basis (for the nightly review, the class's economic life).
+//   (3) Otherwise review when k* <= lead_time_years: a replacement that near must be budgeted or
+//       ordered now.
+//   (4) Otherwise keep: a unit younger than its economic life whose replacement is further away
+//       than the lead time is never due. (How close D and C are is the close_call flag of
+//       review/at_stake.h, not a verdict.)
 #pragma once
 
 #include <optional>
@@ -33,11 +35,11 @@ const char* to_string(Verdict verdict);  // "keep" | "review" | "replace"
 
 // Which test decided the verdict.
 enum class VerdictTest {
-  cannot_weigh,         // rule (0)
-  replace_now,          // rule (1)
-  past_economic_life,   // rule (2)
-  close_to_challenger,  // rule (3)
-  none_held,            // rule (4): keep
+  cannot_weigh,        // rule (0)
+  replace_now,         // rule (1)
+  past_economic_life,  // rule (2)
+  within_lead_time,    // rule (3)
+  none_held,           // rule (4): keep
 };
 
 // What the rule weighs, all on the decision's basis.
@@ -59,23 +61,17 @@ struct VerdictFinding {
   Verdict verdict = Verdict::review;
   VerdictTest decided_by = VerdictTest::cannot_weigh;
   std::optional<VerdictFigures> figures;  // none under rule (0)
-  // Rule (2)'s figures and whether it holds; present when it was weighed (nightly).
-  std::optional<Years> age;
+  Years age = 0;                          // rule (2): the defender's age
   bool past_economic_life = false;
-  // Rule (3)'s figures and whether it holds; present when it was weighed (nightly).
-  std::optional<double> review_margin;
-  Money gap = 0;      // |D - C|
-  Money allowed = 0;  // review_margin x C
-  bool close_to_challenger = false;
+  Years lead_time_years = 0;  // rule (3)
+  bool within_lead_time = false;
   std::string reason;  // one sentence with the numbers (verdict_reasons.h)
 
   bool due() const { return verdict != Verdict::keep; }
 };
 
-// Rules (1) to (4) for an asset of `age` completed years in the nightly review.
-VerdictFinding nightly_verdict(const VerdictFigures& figures, Years age, double review_margin);
-// Rules (1) and (4) for a case file's defender.
-VerdictFinding case_verdict(const VerdictFigures& figures);
+// Rules (1) to (4) for a defender of `age` completed years.
+VerdictFinding weigh(const VerdictFigures& figures, Years age, Years lead_time_years);
 // Rule (0): `why` says what is missing, e.g. the class model's note.
 VerdictFinding cannot_weigh(std::string_view why);
 

@@ -23,7 +23,7 @@ const char* const kFixtures[] = {"delivery_van.json", "standby_generator.json",
 // What the library makes of the file, to compare the process's output with.
 nlohmann::json expected_json(const std::string& file) {
   const replacement::Case input = formats::read_case(testing::slurp(file));
-  return formats::case_result_to_json(replacement::analyse(input), input.rates);
+  return formats::case_result_to_json(input, replacement::analyse(input));
 }
 
 TEST(CaseCommand, FixturesPrintTheLibrarysJson) {
@@ -60,7 +60,7 @@ TEST(CaseCommand, TableFormatEndsWithTheCaution) {
   const testing::Run run = run_tenure({"case", fixture("delivery_van.json"), "--format", "table"});
   EXPECT_EQ(run.exit_code, 0) << run.err;
   const replacement::Case input = formats::read_case(testing::slurp(fixture("delivery_van.json")));
-  EXPECT_EQ(run.out, formats::case_result_to_table(replacement::analyse(input), input.rates));
+  EXPECT_EQ(run.out, formats::case_result_to_table(input, replacement::analyse(input)));
   EXPECT_NE(run.out.find("Caution: "), std::string::npos);
 }
 
@@ -88,8 +88,8 @@ const std::string kChallenger =
 TEST(CaseCommand, BadFilesExitWithTwoAndOneLine) {
   expect_bad_file(R"({"marr": 0.1, "income_tax_rate": 0.25, "colour": 1, )" + kChallenger + "}",
                   "tenure case: $.colour: unknown key (expected one of marr, income_tax_rate, "
-                  "after_tax_marr, capital_gains_tax_rate, challenger, defender, "
-                  "study_period_years)");
+                  "after_tax_marr, capital_gains_tax_rate, lead_time_years, review_margin, "
+                  "challenger, defender, study_period_years)");
   expect_bad_file(R"({"marr": 0.1, "income_tax_rate": 1.0, )" + kChallenger + "}",
                   "tenure case: $.income_tax_rate: must be in [0, 1)");
   expect_bad_file(R"({"marr": 1e999, "income_tax_rate": 0, )" + kChallenger + "}",

@@ -63,8 +63,8 @@ TEST_F(PolicyRefusals, UnknownKeyAndOutOfRangeRateNameTheirPaths) {
   const cli::testing::Run a = run_tenure({"review", "--db", db, "--policy", typo});
   EXPECT_EQ(a.exit_code, 2);
   EXPECT_EQ(a.err, "tenure review: $.clases: unknown key (expected one of marr, income_tax_rate, "
-                   "after_tax_marr, capital_gains_tax_rate, cost_escalation, review_margin, "
-                   "sources, classes, detail)\n");
+                   "after_tax_marr, capital_gains_tax_rate, cost_escalation, lead_time_years, "
+                   "review_margin, esl_band, sources, classes, detail)\n");
   const std::string rate = dir.write("rate.json", R"({"marr": 12, "income_tax_rate": 0.25,
     "classes": {}})");
   const cli::testing::Run b = run_tenure({"policy", "check", rate});

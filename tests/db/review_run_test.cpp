@@ -17,6 +17,7 @@
 #include "formats/case_json.h"
 #include "formats/policy_json.h"
 #include "replacement/case_analysis.h"
+#include "replacement/stakes.h"
 #include "review/verdict_rule.h"
 
 namespace tenure::db {
@@ -28,6 +29,9 @@ using testing_support::TempDatabase;
 using testing_support::text_of;
 
 constexpr double kExact = 1e-9;  // relative: the fits see noiseless data
+
+// The rates of the fixture policy at income tax rate `tax` (fixtures::noiseless_policy).
+tax::Rates r_rates(double tax) { return tax::Rates::make(0.10, tax); }
 
 class NoiselessFleet : public ::testing::TestWithParam<double> {
  protected:
@@ -93,7 +97,8 @@ TEST_P(NoiselessFleet, VerdictsEqualTheDefenderCaseAnalysis) {
   const double c_star = challenger.challenger.on(basis).curve.best_euac;
   const int esl = challenger.challenger.on(basis).curve.best_years;
   Statement q(db, "SELECT asset_id, age_years, first_cost, market_value_now, verdict, "
-                  "replace_after_years, defender_euac FROM tenure_latest");
+                  "replace_after_years, defender_euac, delay_cost, early_cost, repair_limit "
+                  "FROM tenure_latest");
   int rows = 0;
   while (q.step()) {
     ++rows;
@@ -121,10 +126,19 @@ TEST_P(NoiselessFleet, VerdictsEqualTheDefenderCaseAnalysis) {
     EXPECT_EQ(d.challenger_euac, c_star);
     EXPECT_EQ(d.challenger_esl, esl);
     const auto& weighed = r.defender->on(r.basis);
-    const review::VerdictFinding expected = review::nightly_verdict(
-        review::figures_of(d, weighed.curve.marginal_costs[0], weighed.costs.max_years()), age,
-        0.05);
+    const review::VerdictFinding expected = review::weigh(
+        review::figures_of(d, weighed.curve.marginal_costs[0], weighed.costs.max_years()), age, 1);
     EXPECT_EQ(std::string(q.text(4)), review::to_string(expected.verdict));
+    // What is at stake, from the case's timing (replacement/stakes.h, tested on its own).
+    const replacement::Stakes s =
+        replacement::stakes(d.timing, replacement::repair_deduction_factor(r_rates(tax), r.basis));
+    if (s.delay_cost) {
+      EXPECT_NEAR(q.real(7), *s.delay_cost, 1e-6 * d.timing.present_worth[0]);
+    } else {
+      EXPECT_TRUE(q.is_null(7));
+    }
+    EXPECT_NEAR(q.real(8), s.early_cost, 1e-6 * d.timing.present_worth[0]);
+    EXPECT_NEAR(q.real(9), s.repair_limit, 1e-6 * d.timing.present_worth[0]);
   }
   EXPECT_EQ(rows, 30);
 }

@@ -62,7 +62,14 @@ const std::vector<std::string> kAssetResult = {"run_id INTEGER 1 1",
                                                "replace_after_years INTEGER 0 0",
                                                "verdict TEXT 1 0",
                                                "reason TEXT 1 0",
-                                               "basis TEXT 1 0"};
+                                               "basis TEXT 1 0",
+                                               // SPEC 11, from schema version 2:
+                                               "delay_cost REAL 0 0",
+                                               "early_cost REAL 0 0",
+                                               "repair_limit REAL 0 0",
+                                               "break_even_price REAL 0 0",
+                                               "break_even_cost_factor REAL 0 0",
+                                               "close_call INTEGER 0 0"};
 
 // SPEC 7's columns of tenure_latest, in its order (views report no types or keys).
 const std::vector<std::string> kLatestSpec = {"run_id",

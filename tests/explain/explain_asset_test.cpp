@@ -91,6 +91,11 @@ TEST(ExplainAsset, ClassWithoutCostCurveIsUnderReviewWithItsNote) {
   f.stored.class_esl_years.reset();
   f.stored.defender_best_years.reset();
   f.stored.replace_after_years.reset();
+  for (auto* figure : {&f.stored.delay_cost, &f.stored.early_cost, &f.stored.repair_limit,
+                       &f.stored.break_even_price, &f.stored.break_even_cost_factor}) {
+    figure->reset();
+  }
+  f.stored.close_call.reset();
   f.stored.verdict = review::Verdict::review;
   const Explanation e = explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt);
   EXPECT_FALSE(e.review.defender);

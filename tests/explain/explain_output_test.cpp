@@ -89,7 +89,7 @@ TEST(ExplainJson, EquivalentCaseAnalysesToTheSameFigures) {
     const nlohmann::json doc = explanation_to_json(e);
     const replacement::Case input = formats::read_case(doc.at("equivalent_case").dump());
     const nlohmann::json as_case =
-        formats::case_result_to_json(replacement::analyse(input), input.rates);
+        formats::case_result_to_json(input, replacement::analyse(input));
     // The shape `tenure case` prints (SPEC 5), figure for figure.
     for (const char* basis : {"before_tax", "after_tax"}) {
       if (!as_case.at("defender").contains(basis)) continue;

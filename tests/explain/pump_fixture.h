@@ -18,6 +18,7 @@
 #include "explain/explanation.h"
 #include "replacement/case_analysis.h"
 #include "results/rows.h"
+#include "review/at_stake.h"
 #include "review/verdict_rule.h"
 
 namespace tenure::explain::testing {
@@ -91,8 +92,9 @@ struct PumpFixture {
       defender.operating_costs.push_back(cost(age + k, factor));
       defender.market_values.push_back(kFirstCost * fraction(age + k));
     }
-    const replacement::CaseResult r = replacement::analyse(
-        {tax::Rates::make(0.10, tax), challenger, defender, std::nullopt});
+    const tax::Rates rates = tax::Rates::make(0.10, tax);
+    const replacement::CaseResult r =
+        replacement::analyse({rates, challenger, defender, std::nullopt});
     const replacement::Decision& d = *r.decision;
     const int esl = r.challenger.on(r.basis).curve.best_years;
     stored.class_esl_years = esl;
@@ -104,11 +106,22 @@ struct PumpFixture {
     stored.marginal_cost_next_year = r.defender->on(r.basis).curve.marginal_costs[0];
     stored.replace_after_years = d.timing.keep_years;
     // SPEC 6 "Nightly verdict", by the one rule (review/verdict_rule.h) on the case's figures.
-    stored.verdict = review::nightly_verdict(
+    stored.verdict = review::weigh(
                          review::figures_of(d, *stored.marginal_cost_next_year,
                                             r.defender->on(r.basis).costs.max_years()),
-                         age, 0.05)
+                         age, 1)
                          .verdict;
+    // What is at stake, by the one rule (review/at_stake.h) on the case's figures.
+    const review::AtStake s = review::at_stake(
+        d, *r.defender, defender,
+        replacement::price_lines(challenger, r.challenger, rates, r.basis), kChallengerCost,
+        rates, 0.05);
+    stored.delay_cost = s.delay_cost;
+    stored.early_cost = s.early_cost;
+    stored.repair_limit = s.repair_limit;
+    stored.break_even_price = s.break_even_price;
+    stored.break_even_cost_factor = s.break_even_cost_factor;
+    stored.close_call = s.close_call;
     stored.reason = "";  // the review's wording; each test fills it or expects it to differ
     result = r;
     policy = run_policy(run);

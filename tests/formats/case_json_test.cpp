@@ -46,7 +46,8 @@ TEST(ReadCase, EveryBadInputNamesItsPathAndRule) {
       // Unknown keys at each level.
       {"top-level typo", [](json& c) { c["mar"] = 0.1; },
        "$.mar|unknown key (expected one of marr, income_tax_rate, after_tax_marr, "
-       "capital_gains_tax_rate, challenger, defender, study_period_years)"},
+       "capital_gains_tax_rate, lead_time_years, review_margin, challenger, defender, "
+       "study_period_years)"},
       {"challenger typo", [](json& c) { c["challenger"]["foo"] = 1; },
        "$.challenger.foo|unknown key (expected one of first_cost, operating_costs, "
        "market_values, depreciation)"},
@@ -211,7 +212,7 @@ using Keys = std::set<std::string>;
 
 json analysed(const json& document) {
   const replacement::Case c = read_case(document.dump());
-  return case_result_to_json(replacement::analyse(c), c.rates);
+  return case_result_to_json(c, replacement::analyse(c));
 }
 
 TEST(CaseResultJson, HasTheListedKeys) {
@@ -242,7 +243,9 @@ TEST(CaseResultJson, HasTheListedKeys) {
             (Keys{"market_value_now", "book_value_now", "tax_on_sale_now", "after_tax"}));
   EXPECT_EQ(keys_of(out["decision"]),
             (Keys{"basis", "verdict", "replace_after_years", "reason", "challenger_euac",
-                  "challenger_esl_years", "defender_euac", "defender_best_years", "timing"}));
+                  "challenger_esl_years", "defender_euac", "defender_best_years", "timing",
+                  "delay_cost", "early_cost", "repair_limit", "break_even_price",
+                  "break_even_cost_factor", "close_call"}));
   EXPECT_EQ(keys_of(out["decision"]["timing"][0]), (Keys{"keep_years", "present_worth_cost"}));
   EXPECT_EQ(out["decision"]["timing"].size(), 3u);  // keep 0, 1 or 2 years
   EXPECT_EQ(keys_of(out["study_period"]),
@@ -301,13 +304,28 @@ TEST(CaseResultJson, NumbersMatchAHandComputation) {
   // keep 1 -> (208.125 + 4000) / 1.075 = 3914.53..., so keep one year.
   const json& decision = out["decision"];
   EXPECT_EQ(decision["basis"], "after_tax");
-  EXPECT_EQ(decision["verdict"], "keep");
+  // k* = 1 is within the default lead time of 1 year: review (SPEC 6, revised).
+  EXPECT_EQ(decision["verdict"], "review");
   EXPECT_EQ(decision["replace_after_years"], 1);
   EXPECT_NEAR(decision["timing"][0]["present_worth_cost"].get<double>(), 4000, 1e-6);
   EXPECT_NEAR(decision["timing"][1]["present_worth_cost"].get<double>(), 4208.125 / 1.075, 1e-6);
   EXPECT_NEAR(decision["challenger_euac"].get<double>(), 300, kTol);
   EXPECT_NEAR(decision["defender_euac"].get<double>(), 208.125, kTol);
   EXPECT_FALSE(decision["reason"].get<std::string>().empty());
+  // At stake (SPEC 11), by hand. k* = 1 is the last year given: no cost of waiting. Replacing
+  // now costs T(0) - T(1) = 4000 - 4208.125 / 1.075; the repair limit is that over
+  // 1 - 0.25 / 1.075. The challenger's EUAC against its price P: 1.075 P + 0.75 x 100 - 0.25 P
+  // (its deduction) - 0.6 P (its sale, net of tax) = 0.225 P + 75, equal to D* = 208.125 at
+  // P = 133.125 / 0.225. The defender's against a factor f on its costs: 275 x 1.075 + 112.5 f
+  // - 200 = 95.625 + 112.5 f, equal to C* = 300 at f = 204.375 / 112.5. The break-even price is
+  // 41% below the price: no close call.
+  const double early = 4000 - 4208.125 / 1.075;
+  EXPECT_TRUE(decision["delay_cost"].is_null());
+  EXPECT_NEAR(decision["early_cost"].get<double>(), early, 1e-9);
+  EXPECT_NEAR(decision["repair_limit"].get<double>(), early / (1 - 0.25 / 1.075), 1e-9);
+  EXPECT_NEAR(decision["break_even_price"].get<double>(), 133.125 / 0.225, 1e-9);
+  EXPECT_NEAR(decision["break_even_cost_factor"].get<double>(), 204.375 / 112.5, 1e-12);
+  EXPECT_EQ(decision["close_call"], false);
 }
 
 TEST(CaseResultJson, KeepsFullPrecision) {

@@ -48,7 +48,8 @@ struct BadPolicy {
 
 const std::string kTopKeys =
     "unknown key (expected one of marr, income_tax_rate, after_tax_marr, "
-    "capital_gains_tax_rate, cost_escalation, review_margin, sources, classes, detail)";
+    "capital_gains_tax_rate, cost_escalation, lead_time_years, review_margin, esl_band, "
+    "sources, classes, detail)";
 const std::string kClassKeys =
     "unknown key (expected one of challenger_first_cost, max_life_years, depreciation, "
     "market_value, cost_model)";
@@ -253,10 +254,12 @@ TEST(CaseRefusals, WhatTheCaseTestsLeaveOut) {
   const std::vector<BadPolicy> cases = {
       {"cost model is a policy key", [](json& c) { c["cost_model"] = "auto"; },
        "$.cost_model|unknown key (expected one of marr, income_tax_rate, after_tax_marr, "
-       "capital_gains_tax_rate, challenger, defender, study_period_years)"},
+       "capital_gains_tax_rate, lead_time_years, review_margin, challenger, defender, "
+       "study_period_years)"},
       {"sources are a policy key", [](json& c) { c["sources"] = json::object(); },
        "$.sources|unknown key (expected one of marr, income_tax_rate, after_tax_marr, "
-       "capital_gains_tax_rate, challenger, defender, study_period_years)"},
+       "capital_gains_tax_rate, lead_time_years, review_margin, challenger, defender, "
+       "study_period_years)"},
       {"switch as text", [](json& c) { c["challenger"]["depreciation"]["switch_to_straight_line"] = "yes"; },
        "$.challenger.depreciation.switch_to_straight_line|expected true or false"},
       {"method as number", [](json& c) { c["challenger"]["depreciation"]["method"] = 1; },
@@ -295,7 +298,7 @@ TEST(CaseRefusals, HugeFiniteMoneyGivesFiniteResultsOrAnError) {
   document["challenger"]["market_values"] = {1e300, 1e300};
   try {
     const replacement::Case c = read_case(document.dump());
-    const json out = case_result_to_json(replacement::analyse(c), c.rates);
+    const json out = case_result_to_json(c, replacement::analyse(c));
     const std::string text = out.dump();
     EXPECT_EQ(text.find("null"), std::string::npos) << text;  // nlohmann writes NaN/inf as null
   } catch (const InputError& error) {

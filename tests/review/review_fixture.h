@@ -40,7 +40,9 @@ inline ClassPolicy van_policy() {
 
 // Invented rates: MARR 10%, t = 25% (after-tax MARR 7.5% by default).
 inline Policy invented_policy(Detail detail = Detail::none) {
-  Policy policy{tax::Rates::make(0.10, 0.25), detail, 0, 0.05, {}, {}};
+  Policy policy;
+  policy.rates = tax::Rates::make(0.10, 0.25);
+  policy.detail = detail;
   policy.classes.emplace("pump-duty", pump_policy());
   policy.classes.emplace("van-delivery", van_policy());
   return policy;

@@ -1,0 +1,48 @@
+// What is at stake, written out (see at_stake_output.h).
+#include "formats/at_stake_output.h"
+
+#include <fmt/format.h>
+
+#include "formats/text_table.h"
+
+namespace tenure::formats {
+
+std::string money_or_dash(const std::optional<Money>& amount) {
+  return amount ? money(*amount) : "-";
+}
+
+nlohmann::json at_stake_to_json(const review::AtStake& s) {
+  const auto or_null = [](const auto& value) {
+    return value ? nlohmann::json(*value) : nlohmann::json(nullptr);
+  };
+  return {{"delay_cost", or_null(s.delay_cost)},
+          {"early_cost", s.early_cost},
+          {"repair_limit", s.repair_limit},
+          {"break_even_price", or_null(s.break_even_price)},
+          {"break_even_cost_factor", or_null(s.break_even_cost_factor)},
+          {"close_call", s.close_call}};
+}
+
+std::string at_stake_table(const review::AtStake& s) {
+  TextTable t({"figure", "value", "meaning"}, 2);
+  t.add_row({"cost of waiting a year", money_or_dash(s.delay_cost),
+             s.delay_cost ? "replacing one year after the best time costs this much more"
+                          : "none: the best time is the last year weighed"});
+  t.add_row({"cost of replacing now", money(s.early_cost),
+             "replacing now instead of at the best time costs this much more"});
+  t.add_row({"repair limit", money(s.repair_limit),
+             "the largest one-time repair now still worth making rather than replacing"});
+  t.add_row({"break-even price", money_or_dash(s.break_even_price),
+             s.break_even_price ? "at this challenger price, replacing now and keeping cost the same"
+                                : "none: no challenger price up to 1e15 makes replacing now pay"});
+  t.add_row({"break-even cost factor",
+             s.break_even_cost_factor ? fmt::format("{:.4f}", *s.break_even_cost_factor) : "-",
+             s.break_even_cost_factor
+                 ? "its operating costs times this make replacing now and keeping cost the same"
+                 : "none: no positive factor on its operating costs makes replacing now pay"});
+  t.add_row({"close call", s.close_call ? "yes" : "no",
+             "yes when the break-even price is within the review margin of the price"});
+  return t.render();
+}
+
+}  // namespace tenure::formats
