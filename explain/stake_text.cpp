@@ -16,9 +16,9 @@ using formats::percent;
 
 namespace {
 
-// "  name  = formula\n" then "        = numbers = value\n", aligned.
+// "  name = formula\n" then "    = numbers = value\n".
 std::string figure(const char* name, const std::string& formula, const std::string& numbers) {
-  return fmt::format("  {:<22} = {}\n  {:<22} = {}\n", name, formula, "", numbers);
+  return fmt::format("  {} = {}\n    = {}\n", name, formula, numbers);
 }
 
 }  // namespace
@@ -47,20 +47,16 @@ std::string at_stake(const Explanation& e) {
     body += figure("repair limit", "0 when the verdict is replace (k* = 0)", money(0));
   } else {
     const Money best_kept = *std::min_element(t.begin() + 1, t.end());
-    body += figure(
-        "repair limit",
-        "max(0, T(0) - least T(k) over k >= 1)" +
-            std::string(taxed ? " / (1 - t (P/F, i, 1)): expensed, deducted at end of year 1"
-                              : ""),
-        fmt::format("max(0, {} - {}){} = {}", money(t[0]), money(best_kept), deduction,
-                    money(s.repair_limit)));
+    body += figure("repair limit",
+                   std::string("max(0, T(0) - least T(k), k >= 1)") +
+                       (taxed ? " / (1 - t (P/F, i, 1))" : ""),
+                   fmt::format("max(0, {} - {}){} = {}", money(t[0]), money(best_kept), deduction,
+                               money(s.repair_limit)));
   }
   const Money price = e.model.policy->challenger_first_cost;
   if (s.break_even_price && s.break_even_price_life) {
     const replacement::Line& line = e.model.price_lines[*s.break_even_price_life - 1];
-    body += figure("break-even price",
-                   "max over n of (D* - beta_n) / alpha_n, the challenger's EUAC(n) = alpha_n P "
-                   "+ beta_n",
+    body += figure("break-even price", "max over n of (D* - beta_n) / alpha_n",
                    fmt::format("({} - {}) / {:.6f} at n = {} = {}, against the price {} ({:+.2f}%)",
                                money(d.defender_euac), money(line.intercept), line.slope,
                                *s.break_even_price_life, money(*s.break_even_price), money(price),
@@ -73,8 +69,7 @@ std::string at_stake(const Explanation& e) {
     const auto lines = replacement::cost_factor_lines(e.review.inputs.ownership, *e.review.defender,
                                                       rates, d.basis);
     const replacement::Line& line = lines[*s.break_even_factor_years - 1];
-    body += figure("break-even cost factor",
-                   "max over k of (C* - b_k) / a_k, the defender's EUAC(k) = f a_k + b_k",
+    body += figure("break-even cost factor", "max over k of (C* - b_k) / a_k",
                    fmt::format("({} - {}) / {} at k = {} = {:.4f}", money(d.challenger_euac),
                                money(line.intercept), money(line.slope),
                                *s.break_even_factor_years, *s.break_even_cost_factor));
@@ -84,13 +79,19 @@ std::string at_stake(const Explanation& e) {
   }
   body += figure("close call", "|P_be / P - 1| <= review margin",
                  s.break_even_price
-                     ? fmt::format("|{} / {} - 1| = {} against {}: {}", money(*s.break_even_price),
-                                   money(price),
-                                   percent(std::abs(*s.break_even_price / price - 1)),
+                     ? fmt::format("|{} / {} - 1| = {:.2f}% against {}: {}",
+                                   money(*s.break_even_price), money(price),
+                                   std::abs(*s.break_even_price / price - 1) * 100,
                                    percent(e.policy->review_margin), s.close_call ? "yes" : "no")
                      : "no break-even price: no");
-  body += "  T(k): present worth of keeping k more years, then the challenger forever (section "
-          "10);\n  D*, C*: the least EUACs of defender and challenger on the basis.\n";
+  body +=
+      "  T(k): present worth of keeping k more years, then the challenger forever (section 10).\n"
+      "  D*, C*: the least EUACs of defender and challenger on the basis; the challenger's EUAC(n)\n"
+      "  = alpha_n P + beta_n at price P, the defender's EUAC(k) = f a_k + b_k with its operating\n"
+      "  costs times f. The break-evens are where replacing now and keeping cost the same.\n";
+  if (taxed) {
+    body += "  A repair is expensed: its tax deduction comes at the end of year 1.\n";
+  }
   return section(fmt::format("12. What is at stake ({} basis, present worth at {})",
                              basis_words(d.basis), percent(i)),
                  body);
