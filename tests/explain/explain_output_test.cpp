@@ -84,8 +84,9 @@ TEST(ExplainJson, HoldsTheTablesAndParses) {
 }
 
 TEST(ExplainJson, EquivalentCaseAnalysesToTheSameFigures) {
-  for (const double tax : {0.0, 0.25}) {
-    const Explanation e = reproduced_explanation(9, tax);
+  for (const auto& [age, tax] : {std::pair{9, 0.0}, {9, 0.25}, {2, 0.25}, {5, 0.25}, {11, 0.0}}) {
+    SCOPED_TRACE(age);
+    const Explanation e = reproduced_explanation(age, tax);
     const nlohmann::json doc = explanation_to_json(e);
     const replacement::Case input = formats::read_case(doc.at("equivalent_case").dump());
     const nlohmann::json as_case =
@@ -102,6 +103,15 @@ TEST(ExplainJson, EquivalentCaseAnalysesToTheSameFigures) {
     EXPECT_EQ(doc.at("verdict").at("replace_after_years"),
               as_case.at("decision").at("replace_after_years"));
     EXPECT_EQ(doc.at("verdict").at("challenger_euac"), as_case.at("decision").at("challenger_euac"));
+    // One vocabulary: `tenure case` of the equivalent case gives explain's verdict, reason and
+    // what is at stake.
+    EXPECT_EQ(doc.at("verdict").at("verdict"), as_case.at("decision").at("verdict"));
+    EXPECT_EQ(doc.at("verdict").at("reason"), as_case.at("decision").at("reason"));
+    for (const char* figure : {"delay_cost", "early_cost", "repair_limit", "break_even_price",
+                               "break_even_cost_factor", "close_call"}) {
+      EXPECT_EQ(doc.at("verdict").at("at_stake").at(figure), as_case.at("decision").at(figure))
+          << figure;
+    }
   }
 }
 
