@@ -35,7 +35,17 @@ Years whole_years(double value, const std::string& where, Years min, Years max) 
 }
 
 std::string key_path(std::string_view parent, std::string_view key) {
-  return fmt::format("{}.{}", parent, key);
+  std::string path = fmt::format("{}.", parent);
+  for (const char c : key) {
+    // A control character would reach the terminal raw: written as JSON writes it.
+    const auto byte = static_cast<unsigned char>(c);
+    if (byte < 0x20 || byte == 0x7F) {
+      path += fmt::format("\\u{:04x}", byte);
+    } else {
+      path += c;
+    }
+  }
+  return path;
 }
 
 std::string index_path(std::string_view parent, std::size_t index) {

@@ -2,7 +2,10 @@
 // the JSON path where they occur, syntax errors with their line and column.
 #include <gtest/gtest.h>
 
+#include <fmt/format.h>
+
 #include "core/errors.h"
+#include "formats/json_path.h"
 #include "formats/json_text.h"
 
 namespace tenure::formats {
@@ -54,6 +57,31 @@ TEST(JsonText, OverflowingNumberNamesItsPath) {
   EXPECT_EQ(top.rule(), "must be a finite number (this one overflows a double)");
   const InputError element = error_of("{\"c\": {\"costs\": [1, [2], -1e999]}}");
   EXPECT_EQ(element.where(), "$.c.costs[2]");
+}
+
+TEST(JsonText, TextAfterANulByteIsNotIgnored) {
+  // A file of a whole document, a NUL and more bytes: the parser alone stops at the NUL.
+  const std::string text("{\"marr\": 0.1}\0garbage", 21);
+  const InputError error = error_of(text);
+  EXPECT_EQ(error.where(), "$");
+  EXPECT_EQ(error.rule(), "invalid JSON: a NUL byte at offset 13");
+}
+
+TEST(JsonPath, WritesControlCharactersOfKeysEscaped) {
+  // An unknown key with a BEL in it must not ring the terminal when its path is printed.
+  EXPECT_EQ(key_path("$", std::string("m\x07x")), "$.m\\u0007x");
+  EXPECT_EQ(key_path("$.classes", std::string("a\nb\x7f")), "$.classes.a\\u000ab\\u007f");
+  EXPECT_EQ(key_path("$", "van-delivery"), "$.van-delivery");
+}
+
+TEST(JsonText, ManySiblingsParse) {
+  // 50,000 members in one object (a policy of that many classes) parse, each key checked.
+  std::string text = "{";
+  for (int i = 0; i < 50000; ++i) text += fmt::format("{}\"k{}\": {}", i ? "," : "", i, i);
+  text += ", \"k49999\": 0}";
+  EXPECT_EQ(error_of(text).where(), "$.k49999");
+  text.erase(text.rfind(','));
+  EXPECT_EQ(parse_json_text(text + "}").size(), 50000u);
 }
 
 }  // namespace
