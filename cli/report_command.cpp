@@ -1,8 +1,6 @@
 // `tenure report --db PATH --out FILE.html [--run N]`: one self-contained static HTML page about
 // a stored run (SPEC 8): the fleet by verdict, per class its EUAC curves and ages against its
 // economic life, the due list with reasons and a marginal-cost chart per due asset.
-#include <cstdio>
-#include <fstream>
 #include <memory>
 #include <optional>
 #include <string>
@@ -11,6 +9,7 @@
 
 #include "app/report_run.h"
 #include "cli/commands.h"
+#include "cli/output_file.h"
 #include "core/errors.h"
 #include "formats/text_table.h"
 #include "report/report_page.h"
@@ -28,18 +27,11 @@ void run_report(const ReportOptions& o, const Console& console) {
   db::Connection db = db::Connection::open_existing(o.db, "--db");
   const report::ReportData data = app::read_report_data(db, o.run);
   const std::string html = report::render_report(data);
-  // Written next to the target and renamed over it, so a reader never sees half a page.
-  const std::string partial = o.out + ".partial";
-  {
-    std::ofstream file(partial, std::ios::binary | std::ios::trunc);
-    file << html;
-    file.close();
-    if (!file) throw InputError("--out", "cannot write the file '" + partial + "'");
+  if (o.out == "-") {  // the page alone on standard output
+    console.out << html;
+    return;
   }
-  if (std::rename(partial.c_str(), o.out.c_str()) != 0) {
-    std::remove(partial.c_str());
-    throw InputError("--out", "cannot write the file '" + o.out + "'");
-  }
+  write_whole_file(o.out, html, "--out");
   std::size_t due = 0;
   for (const results::AssetRow& a : data.assets) due += a.due() ? 1 : 0;
   formats::TextTable t({"", ""}, 2);
@@ -58,7 +50,8 @@ void add_report_command(CLI::App& app, const Console& console) {
   CLI::App* command = app.add_subcommand(
       "report", "A static HTML page with charts of a stored run, for people who sign off a plan");
   command->add_option("--db", o->db, "the maintenance database (SQLite file)")->required();
-  command->add_option("--out", o->out, "the HTML file to write")->required();
+  command->add_option("--out", o->out, "the HTML file to write; - writes the page to standard output")
+      ->required();
   command->add_option("--run", o->run, "the run to report; default: the latest successful run")
       ->type_name("N");
   command->footer(
@@ -67,8 +60,10 @@ void add_report_command(CLI::App& app, const Console& console) {
       "new unit before and after tax against years kept with the economic life marked and the\n"
       "ages of the units in service against it, the due list with reasons, each due asset's\n"
       "marginal cost of keeping against the new unit's least EUAC, and the rejected input rows.\n"
-      "Exit codes: 0 written, 1 the database cannot be read, 2 bad arguments, no such run or an\n"
-      "output file that cannot be written.\n"
+      "--out - writes the page alone to standard output. Anything at the path that is not a\n"
+      "regular file (a device, a directory, a symbolic link) is refused, never replaced.\n"
+      "Exit codes: 0 written, 1 the database cannot be read or the file cannot be written (a\n"
+      "full disk), 2 bad arguments, no such run, or an output path that cannot be used.\n"
       "\n"
       "Examples:\n"
       "  tenure report --db fleet.db --out review.html\n"

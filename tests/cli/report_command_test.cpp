@@ -59,7 +59,50 @@ TEST_F(ReportCommand, UnwritableOutputIsExitTwo) {
   const std::string out = dir.path("no/such/dir/x.html");
   const testing::Run r = run_tenure({"report", "--db", db, "--out", out});
   EXPECT_EQ(r.exit_code, 2);
-  EXPECT_EQ(r.err, "tenure report: --out: cannot write the file '" + out + ".partial'\n");
+  EXPECT_EQ(r.err, "tenure report: --out: cannot create '" + out +
+                       ".partial': No such file or directory\n");
+}
+
+TEST_F(ReportCommand, WhatIsNotARegularFileIsNeverReplaced) {
+  // A device (as root, /dev/null would become a regular file), a symbolic link, a directory.
+  const std::string target = dir.write("target.html", "keep me");
+  const std::string link = dir.path("link.html");
+  std::filesystem::create_symlink(target, link);
+  std::filesystem::create_directory(dir.path("folder"));
+  const std::pair<std::string, std::string> refused[] = {
+      {"/dev/null", "a device"}, {link, "a symbolic link"}, {dir.path("folder"), "a directory"}};
+  for (const auto& [path, kind] : refused) {
+    SCOPED_TRACE(path);
+    const testing::Run r = run_tenure({"report", "--db", db, "--out", path});
+    EXPECT_EQ(r.exit_code, 2);
+    EXPECT_EQ(r.err, "tenure report: --out: '" + path + "' is " + kind +
+                         ": it is not replaced; give the path of a regular file, or - for "
+                         "standard output\n");
+  }
+  EXPECT_TRUE(std::filesystem::is_character_file("/dev/null"));
+  EXPECT_TRUE(std::filesystem::is_symlink(link));
+  EXPECT_EQ(slurp(target), "keep me");
+  EXPECT_FALSE(std::filesystem::exists(link + ".partial"));
+}
+
+TEST_F(ReportCommand, DashWritesThePageToStandardOutput) {
+  const testing::Run r = run_tenure({"report", "--db", db, "--out", "-"});
+  EXPECT_EQ(r.exit_code, 0) << r.err;
+  EXPECT_EQ(r.out.rfind("<!DOCTYPE html>", 0), 0u);
+  EXPECT_NE(r.out.find("</html>"), std::string::npos);
+  EXPECT_FALSE(std::filesystem::exists("-"));
+}
+
+TEST_F(ReportCommand, AFullDiskIsExitOneAndLeavesNothingBehind) {
+  // ulimit -f caps the files the command may write at 2 x 512 bytes: the write fails with
+  // EFBIG, as on a full disk (SIGXFSZ ignored so that the write returns the error).
+  const std::string out = dir.path("full.html");
+  const testing::Run r =
+      run_tenure({"report", "--db", db, "--out", out}, "", "trap '' XFSZ; ulimit -f 2; ");
+  EXPECT_EQ(r.exit_code, 1) << r.err;
+  EXPECT_EQ(r.err.rfind("tenure report: --out: cannot write '" + out + "': ", 0), 0u) << r.err;
+  EXPECT_FALSE(std::filesystem::exists(out));
+  EXPECT_FALSE(std::filesystem::exists(out + ".partial"));
 }
 
 }  // namespace

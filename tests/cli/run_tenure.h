@@ -51,11 +51,12 @@ inline std::string slurp(const std::string& file) {
   return text.str();
 }
 
-// Runs tenure with `args`; `standard_input` is fed to its stdin.
+// Runs tenure with `args`; `standard_input` is fed to its stdin. `shell_setup` runs in the same
+// shell first (e.g. "ulimit -f 2; " to make the disk look full to it).
 inline Run run_tenure(std::initializer_list<std::string> args,
-                      const std::string& standard_input = "") {
+                      const std::string& standard_input = "", const std::string& shell_setup = "") {
   const TempDir dir;
-  std::string command = quoted(TENURE_EXECUTABLE);
+  std::string command = shell_setup + "exec " + quoted(TENURE_EXECUTABLE);
   // Appends one piece at a time: g++ 12 warns falsely (-Wrestrict) on "literal" + string.
   for (const std::string& arg : args) command.append(" ").append(quoted(arg));
   command.append(" < ").append(quoted(dir.write("stdin", standard_input)));
