@@ -10,6 +10,8 @@
 //
 // Errors are one line on stderr, "tenure <command>: <where>: <rule>", for example
 //   tenure case: $.challenger.first_cost: must be > 0
+// Standard output is flushed before the exit code is chosen: output that cannot be written (a
+// full disk, `> /dev/full`) is a failure, exit 1, "tenure case: cannot write the output: ...".
 // No exception leaves run_command_line.
 //
 //   int main(int argc, char** argv) { ...; return run_command_line(app, argc, argv, out, err); }

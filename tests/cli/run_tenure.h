@@ -52,15 +52,18 @@ inline std::string slurp(const std::string& file) {
 }
 
 // Runs tenure with `args`; `standard_input` is fed to its stdin. `shell_setup` runs in the same
-// shell first (e.g. "ulimit -f 2; " to make the disk look full to it).
+// shell first (e.g. "ulimit -f 2; " to make the disk look full to it); `standard_output` is where
+// its stdout goes instead of being captured (e.g. /dev/full).
 inline Run run_tenure(std::initializer_list<std::string> args,
-                      const std::string& standard_input = "", const std::string& shell_setup = "") {
+                      const std::string& standard_input = "", const std::string& shell_setup = "",
+                      const std::string& standard_output = "") {
   const TempDir dir;
   std::string command = shell_setup + "exec " + quoted(TENURE_EXECUTABLE);
   // Appends one piece at a time: g++ 12 warns falsely (-Wrestrict) on "literal" + string.
   for (const std::string& arg : args) command.append(" ").append(quoted(arg));
   command.append(" < ").append(quoted(dir.write("stdin", standard_input)));
-  command.append(" > ").append(quoted(dir.path("stdout")));
+  command.append(" > ").append(
+      quoted(standard_output.empty() ? dir.path("stdout") : standard_output));
   command.append(" 2> ").append(quoted(dir.path("stderr")));
   const int status = std::system(command.c_str());
   const int exit_code = status != -1 && WIFEXITED(status) ? WEXITSTATUS(status) : -1;
