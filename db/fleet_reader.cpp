@@ -45,6 +45,14 @@ std::optional<Date> date_column(const Statement& q, int column) {
   return parse_iso_date(q.text(column));
 }
 
+std::string ascii_lower(std::string_view text) {
+  std::string out(text);
+  for (char& c : out) {
+    if (c >= 'A' && c <= 'Z') c = static_cast<char>(c - 'A' + 'a');
+  }
+  return out;
+}
+
 std::string bad_date(const Statement& q, int column, const char* name) {
   return db::bad_date(name, q.is_null(column), q.text(column));
 }
@@ -209,8 +217,9 @@ void check_sources(Connection& db, const review::Sources& sources) {
       throw InputError(where, "must be a plain SQL identifier");
     }
     columns.bind(1, *relation.relation);
+    // SQLite resolves column names without regard to ASCII case ("Asset_Id" is asset_id).
     std::unordered_set<std::string> present;
-    while (columns.step()) present.emplace(columns.text(0));
+    while (columns.step()) present.emplace(ascii_lower(columns.text(0)));
     columns.reset();
     if (present.empty()) {
       throw InputError(where, fmt::format("relation '{}' does not exist in the database",

@@ -70,6 +70,29 @@ TEST(Sources, ViewsOverAnotherSchemaGiveTheSameResults) {
   EXPECT_EQ(rows, latest_rows(b));
 }
 
+TEST(Sources, ColumnNamesMatchWhateverTheirCaseAsInSqlite) {
+  // SQLite resolves "Asset_Id" as asset_id; so does the check of the input's columns.
+  TempDatabase plain, shouted;
+  for (TempDatabase* file : {&plain, &shouted}) {
+    Connection db = file->open();
+    fixtures::create_input_tables(db.handle());
+    fixtures::add_noiseless_fleet(db.handle());
+  }
+  {
+    Connection db = shouted.open();
+    db.exec("ALTER TABLE asset RENAME COLUMN asset_id TO Asset_Id;"
+            "ALTER TABLE asset RENAME COLUMN in_service_on TO IN_SERVICE_ON;"
+            "ALTER TABLE cost_event RENAME COLUMN amount TO Amount;"
+            "ALTER TABLE asset_valuation RENAME COLUMN valued_on TO Valued_On;");
+  }
+  Connection a = plain.open();
+  Connection b = shouted.open();
+  app::run_review(a, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
+  app::run_review(b, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
+  EXPECT_EQ(latest_rows(a).size(), 30u);
+  EXPECT_EQ(latest_rows(a), latest_rows(b));
+}
+
 TEST(Sources, NamesThatAreNotPlainIdentifiersAreRefused) {
   TempDatabase file;
   Connection db = file.open();
