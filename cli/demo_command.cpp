@@ -39,17 +39,24 @@ std::string bad_rows_in(const demo::Summary& summary, std::string_view relation)
   return fmt::format(" (of which {} bad on purpose)", count);
 }
 
-// Writes the fleet; an option the generator rejects is named as the command's option.
-db::DemoWrite write(db::Connection& db, const DemoCommandOptions& o) {
+// Runs `step`; an option the generator rejects is named as the command's option.
+template <class Step>
+auto named_as_options(Step&& step) {
   try {
-    return db::write_demo_fleet(
-        db, o.generator,
-        o.force ? db::ExistingDemoTables::replace : db::ExistingDemoTables::refuse);
+    return step();
   } catch (const InputError& error) {
     const auto option = kOptionForField.find(error.where());
     if (option == kOptionForField.end()) throw;
     throw InputError(option->second, error.rule());
   }
+}
+
+db::DemoWrite write(db::Connection& db, const DemoCommandOptions& o) {
+  return named_as_options([&] {
+    return db::write_demo_fleet(
+        db, o.generator,
+        o.force ? db::ExistingDemoTables::replace : db::ExistingDemoTables::refuse);
+  });
 }
 
 void run_demo(DemoCommandOptions o, const Console& console) {
@@ -64,6 +71,7 @@ void run_demo(DemoCommandOptions o, const Console& console) {
         static_cast<double>(o.generator.assets) * demo::kDefaultEvents / demo::kDefaultAssets));
   }
   o.generator.bad_rows = !o.no_bad_rows;
+  named_as_options([&] { demo::check_options(o.generator); });  // before a file is made
 
   const auto started = std::chrono::steady_clock::now();
   db::Connection db = db::Connection::open(o.db, true);

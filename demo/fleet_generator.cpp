@@ -17,20 +17,8 @@ namespace {
 
 constexpr int kMaxHistoryYears = 100;
 constexpr std::size_t kMaxAssets = 10'000'000;
+constexpr std::size_t kMaxEvents = 1'000'000'000;  // a negative count wraps far beyond it
 
-void check(const Options& options) {
-  if (options.assets < 1 || options.assets > kMaxAssets) {
-    throw InputError("assets", "must be a whole number from 1 to 10000000");
-  }
-  if (options.events < 1) throw InputError("events", "must be a whole number >= 1");
-  if (options.history_years < 1 || options.history_years > kMaxHistoryYears) {
-    throw InputError("history_years", "must be a whole number from 1 to 100");
-  }
-  // Dates must stay within fleet/date.h rule (1) a hundred years back and a year ahead.
-  if (options.as_of.year() < 1400 + kMaxHistoryYears + 1 || options.as_of.year() > 9998) {
-    throw InputError("as_of", "must be a date in the years 1501 to 9998");
-  }
-}
 
 void emit_assets(const std::vector<Unit>& units, const BadRowPlan& bad, Sink& sink,
                  Summary& summary) {
@@ -79,10 +67,26 @@ void emit_valuations(const std::vector<Unit>& units, const std::vector<PlannedVa
 
 }  // namespace
 
+void check_options(const Options& options) {
+  if (options.assets < 1 || options.assets > kMaxAssets) {
+    throw InputError("assets", "must be a whole number from 1 to 10000000");
+  }
+  if (options.events < 1 || options.events > kMaxEvents) {
+    throw InputError("events", "must be a whole number from 1 to 1000000000");
+  }
+  if (options.history_years < 1 || options.history_years > kMaxHistoryYears) {
+    throw InputError("history_years", "must be a whole number from 1 to 100");
+  }
+  // Dates must stay within fleet/date.h rule (1) a hundred years back and a year ahead.
+  if (options.as_of.year() < 1400 + kMaxHistoryYears + 1 || options.as_of.year() > 9998) {
+    throw InputError("as_of", "must be a date in the years 1501 to 9998");
+  }
+}
+
 Date default_as_of() { return *Date::from_ymd(2026, 11, 30); }
 
 Summary generate(const Options& options, Sink& sink) {
-  check(options);
+  check_options(options);
   Random random(options.seed);
   const std::vector<Unit> units = draw_units(options, random);
   const std::vector<PlannedValuation> valuations = draw_valuations(units, random);

@@ -71,6 +71,10 @@ struct Summary {
 // Generates the fleet into `sink` (call order in fleet_rows.h). The same options give the same
 // rows. Throws InputError naming "assets", "events", "history_years" or "as_of" when an option
 // is out of range; exceptions from the sink pass through.
+// Throws InputError naming the field ("assets", "events", "history_years", "as_of") of an option
+// out of range; generate checks the same first.
+void check_options(const Options& options);
+
 Summary generate(const Options& options, Sink& sink);
 
 }  // namespace tenure::demo

@@ -332,6 +332,11 @@ TEST(FleetGenerator, RejectsOptionsOutOfRange) {
   options.events = 0;
   EXPECT_EQ(where(options), "events");
   options = Options{};
+  options.events = static_cast<std::size_t>(-1);  // what `--events -1` wraps to
+  EXPECT_EQ(where(options), "events");
+  options.events = 1'000'000'001;  // one above the cap
+  EXPECT_EQ(where(options), "events");
+  options = Options{};
   options.history_years = 0;
   EXPECT_EQ(where(options), "history_years");
   options = Options{};
