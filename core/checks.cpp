@@ -36,7 +36,9 @@ void require_rate(Rate value, std::string_view where) {
 
 void require_tax_rate(Rate value, std::string_view where) {
   require_finite(value, where);
-  if (value < 0 || value >= 1) throw InputError(std::string(where), "must be in [0, 1)");
+  if (value < 0 || value > kMaxTaxRate) {
+    throw InputError(std::string(where), "must be in [0, 0.99]");  // kMaxTaxRate
+  }
 }
 
 bool is_plain_identifier(std::string_view name) {

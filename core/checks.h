@@ -21,7 +21,10 @@ inline constexpr double kMaxAmount = 1e15;
 void require_amount(double value, std::string_view where);
 // An interest rate: finite and greater than -1 (so 1 + i > 0).
 void require_rate(Rate value, std::string_view where);
-// A tax rate: 0 <= t < 1.
+// The largest tax rate tenure weighs: above it, after-tax amounts are under 1% of the
+// before-tax ones and their reasons would read "0.00 against 0.00".
+inline constexpr Rate kMaxTaxRate = 0.99;
+// A tax rate: 0 <= t <= kMaxTaxRate.
 void require_tax_rate(Rate value, std::string_view where);
 
 // A plain SQL identifier: [A-Za-z_][A-Za-z0-9_]*, at most 128 characters. Policy sources must be

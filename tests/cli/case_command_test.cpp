@@ -91,7 +91,7 @@ TEST(CaseCommand, BadFilesExitWithTwoAndOneLine) {
                   "after_tax_marr, capital_gains_tax_rate, lead_time_years, review_margin, "
                   "challenger, defender, study_period_years)");
   expect_bad_file(R"({"marr": 0.1, "income_tax_rate": 1.0, )" + kChallenger + "}",
-                  "tenure case: $.income_tax_rate: must be in [0, 1)");
+                  "tenure case: $.income_tax_rate: must be in [0, 0.99]");
   expect_bad_file(R"({"marr": 1e999, "income_tax_rate": 0, )" + kChallenger + "}",
                   "tenure case: $.marr: must be a finite number (this one overflows a double)");
   expect_bad_file(R"({"marr": 0.1, "income_tax_rate": 0})",

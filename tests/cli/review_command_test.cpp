@@ -47,7 +47,7 @@ TEST_F(ReviewCommand, BadPolicyFileIsExitTwoNamingTheJsonPath) {
   const std::string policy = dir.write("bad.json", R"({"marr": 0.1, "income_tax_rate": 1.5, "classes": {}})");
   const cli::testing::Run r = run_tenure({"review", "--db", db, "--policy", policy});
   EXPECT_EQ(r.exit_code, 2);
-  EXPECT_EQ(r.err, "tenure review: $.income_tax_rate: must be in [0, 1)\n");
+  EXPECT_EQ(r.err, "tenure review: $.income_tax_rate: must be in [0, 0.99]\n");
 }
 
 TEST_F(ReviewCommand, BadAsOfDateIsExitTwo) {

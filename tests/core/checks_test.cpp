@@ -37,7 +37,7 @@ const std::string kNonNegative = ">= 0";
 const std::string kPositive = "> 0";
 const std::string kAmount = "1e15";
 const std::string kRate = "greater than -1";
-const std::string kTaxRate = "[0, 1)";
+const std::string kTaxRate = "[0, 0.99]";
 
 std::string describe(const Row& row) {
   return std::string(row.comment) + " (value " + std::to_string(row.value) + ")";
@@ -135,12 +135,16 @@ TEST(RequireRate, GreaterThanMinusOne) {
   });
 }
 
-TEST(RequireTaxRate, HalfOpenZeroToOne) {
+TEST(RequireTaxRate, ZeroToNinetyNinePercent) {
   run_rows({
       {"zero: before-tax only", require_tax_rate, 0.0, ""},
       {"negative zero compares equal to zero", require_tax_rate, -0.0, ""},
       {"a quarter", require_tax_rate, 0.25, ""},
-      {"the next double below one", require_tax_rate, std::nextafter(1.0, 0.0), ""},
+      {"0.99, the largest (kMaxTaxRate)", require_tax_rate, 0.99, ""},
+      {"the next double above 0.99", require_tax_rate, std::nextafter(0.99, 1.0), kTaxRate},
+      {"0.9999999999: after-tax amounts would be too small to weigh", require_tax_rate,
+       0.9999999999, kTaxRate},
+      {"the next double below one", require_tax_rate, std::nextafter(1.0, 0.0), kTaxRate},
       {"one: nothing would be left after tax", require_tax_rate, 1.0, kTaxRate},
       {"above one", require_tax_rate, 1.5, kTaxRate},
       {"the smallest subnormal below zero", require_tax_rate, -kTiny, kTaxRate},

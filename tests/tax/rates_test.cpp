@@ -76,11 +76,16 @@ TEST(Rates, RefusedRatesNameTheirJsonPath) {
   const double above_one = std::nextafter(1.0, 2.0);
   const std::vector<RefusedRow> rows = {
       {"marr 0: must be > 0", 0.0, 0.25, {}, {}, "$.marr"},
+      {"marr 1e-8: below 0.0001, C*/i swamps the tie rule", 1e-8, 0.25, {}, {}, "$.marr"},
+      {"the smallest subnormal marr", 5e-324, 0.25, {}, {}, "$.marr"},
+      {"default after-tax marr 0.0002 x (1 - 0.6) below 0.0001", 0.0002, 0.6, {}, {},
+       "$.after_tax_marr"},
+      {"tax rate 0.9999999999: above 0.99", 0.10, 0.9999999999, {}, {}, "$.income_tax_rate"},
       {"a negative marr", -0.05, 0.25, {}, {}, "$.marr"},
       {"marr just above 100% a year", above_one, 0.25, {}, {}, "$.marr"},
       {"marr NaN", nan, 0.25, {}, {}, "$.marr"},
       {"marr infinite", inf, 0.25, {}, {}, "$.marr"},
-      {"tax rate 1: must be < 1", 0.10, 1.0, {}, {}, "$.income_tax_rate"},
+      {"tax rate 1: must be <= 0.99", 0.10, 1.0, {}, {}, "$.income_tax_rate"},
       {"a negative tax rate", 0.10, -0.01, {}, {}, "$.income_tax_rate"},
       {"tax rate NaN", 0.10, nan, {}, {}, "$.income_tax_rate"},
       {"after-tax marr 0", 0.10, 0.25, 0.0, {}, "$.after_tax_marr"},
@@ -104,11 +109,12 @@ TEST(Rates, RefusedRatesNameTheirJsonPath) {
 }
 
 TEST(Rates, BoundariesThatAreAccepted) {
-  // marr exactly 1 (100% a year) and tax rates just under 1 are inside their ranges (rates.h).
+  // marr exactly 1 (100% a year) or 0.0001, tax rates of 0.99, are inside their ranges (rates.h).
   EXPECT_NO_THROW(Rates::make(1.0, 0.0));
-  EXPECT_NO_THROW(Rates::make(0.10, std::nextafter(1.0, 0.0)));
-  EXPECT_NO_THROW(Rates::make(0.10, 0.25, 1.0, std::nextafter(1.0, 0.0)));
-  EXPECT_NO_THROW(Rates::make(std::numeric_limits<double>::denorm_min(), 0.0));
+  EXPECT_NO_THROW(Rates::make(0.10, 0.99));
+  EXPECT_NO_THROW(Rates::make(0.10, 0.25, 1.0, 0.99));
+  EXPECT_NO_THROW(Rates::make(0.0001, 0.0));
+  EXPECT_NO_THROW(Rates::make(0.10, 0.99, 0.0001));
 }
 
 }  // namespace
