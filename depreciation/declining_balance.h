@@ -22,6 +22,7 @@ class DecliningBalance : public Method {
   std::string_view name() const override { return "declining_balance"; }
   // Throws InputError("salvage", "must not exceed the basis") when salvage > basis.
   std::vector<Money> deductions(Money basis) const override;
+  Money salvage() const override { return spec_.salvage; }
   std::shared_ptr<const Method> scaled(double factor) const override {
     DecliningBalanceSpec spec = spec_;
     spec.salvage *= factor;

@@ -31,6 +31,8 @@ class Method {
     (void)year;
     return 1.0;
   }
+  // The book value its deductions never go below: a book method's salvage; 0 for MACRS and none.
+  virtual Money salvage() const { return 0; }
   // The same method for a unit whose price is `factor` (> 0) times as large: every amount the
   // method holds (a salvage value) times `factor`, its lives and rates as they are. So the
   // deductions of scaled(f) on f x basis are f times those of this method on basis; the

@@ -15,11 +15,21 @@ Schedule::Schedule(const Method& method, Money basis) : basis_(basis) {
   disposal_fractions_.reserve(deductions_.size());
   book_values_.reserve(deductions_.size() + 1);
   book_values_.push_back(basis_);
+  // Sums of rounded deductions can end a few ulps below the salvage (or below 0 for MACRS): the
+  // year that would go below takes only what is left, so a book value is never below it.
+  floor_ = method.salvage();
+  const Money floor = floor_;
   Money deducted = 0;
   for (std::size_t k = 0; k < deductions_.size(); ++k) {
     disposal_fractions_.push_back(method.disposal_year_fraction(static_cast<Years>(k + 1)));
     deducted += deductions_[k];
-    book_values_.push_back(basis_ - deducted);
+    Money book_value = basis_ - deducted;
+    if (book_value < floor) {
+      deductions_[k] -= floor - book_value;
+      deducted = basis_ - floor;
+      book_value = floor;
+    }
+    book_values_.push_back(book_value);
   }
 }
 
@@ -42,7 +52,10 @@ Money Schedule::deduction_if_sold(Years year) const {
 Money Schedule::book_value_if_sold(Years year) const {
   if (year < 0) throw InputError("year", "must be >= 0");
   if (year == 0) return basis_;
-  return book_value(year - 1) - deduction_if_sold(year);
+  if (year > years() || disposal_fractions_[static_cast<std::size_t>(year - 1)] == 1.0) {
+    return book_value(year);  // a full year's deduction: the same as kept
+  }
+  return std::max(floor_, book_value(year - 1) - deduction_if_sold(year));
 }
 
 std::vector<ScheduleRow> Schedule::rows(std::optional<Years> disposal_year) const {

@@ -50,6 +50,7 @@ class Schedule {
   std::vector<Money> deductions_;
   std::vector<double> disposal_fractions_;  // per schedule year
   std::vector<Money> book_values_;          // index = year, 0..years()
+  Money floor_ = 0;                         // the method's salvage: no book value is below it
 };
 
 }  // namespace tenure::depreciation

@@ -17,6 +17,7 @@ class StraightLine : public Method {
   std::string_view name() const override { return "straight_line"; }
   // Throws InputError("salvage", "must not exceed the basis") when salvage > basis.
   std::vector<Money> deductions(Money basis) const override;
+  Money salvage() const override { return spec_.salvage; }
   std::shared_ptr<const Method> scaled(double factor) const override {
     return std::make_shared<StraightLine>(StraightLineSpec{spec_.life_years, spec_.salvage * factor});
   }

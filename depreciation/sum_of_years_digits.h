@@ -18,6 +18,7 @@ class SumOfYearsDigits : public Method {
   std::string_view name() const override { return "sum_of_years_digits"; }
   // Throws InputError("salvage", "must not exceed the basis") when salvage > basis.
   std::vector<Money> deductions(Money basis) const override;
+  Money salvage() const override { return spec_.salvage; }
   std::shared_ptr<const Method> scaled(double factor) const override {
     return std::make_shared<SumOfYearsDigits>(
         SumOfYearsDigitsSpec{spec_.life_years, spec_.salvage * factor});
