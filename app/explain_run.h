@@ -16,8 +16,8 @@
 
 namespace tenure::app {
 
-// The asset `asset_id` in run `run_id` (default: the latest successful run). Throws InputError
-// naming "ASSET" when the run did not review it, and what db::read_run throws.
+// The asset `asset_id` in run `run_id` (default: the latest baseline run, db::read_run). Throws
+// InputError naming "ASSET" when the run did not review it, and what db::read_run throws.
 explain::Explanation explain_stored_asset(db::Connection& db, std::string_view asset_id,
                                           std::optional<std::int64_t> run_id);
 

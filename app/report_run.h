@@ -13,7 +13,7 @@
 
 namespace tenure::app {
 
-// Run `run_id` (default: the latest successful run), its policy read once. Throws what
+// Run `run_id` (default: the latest baseline run, db::read_run), its policy read once. Throws what
 // db::read_run and explain::run_policy throw.
 report::ReportData read_report_data(db::Connection& db, std::optional<std::int64_t> run_id);
 

@@ -8,6 +8,7 @@
 #include <optional>
 
 #include "app/sha256.h"
+#include "core/checks.h"
 #include "core/errors.h"
 #include "core/version.h"
 #include "db/fleet_reader.h"
@@ -58,10 +59,12 @@ std::string policy_text_of(db::Connection& db, const ReviewOptions& options) {
                    "with 'tenure policy set')");
 }
 
-results::RunRow run_row(const Date& as_of, std::string started_at, std::string policy_text,
+results::RunRow run_row(const Date& as_of, std::optional<std::string> scenario,
+                        std::string started_at, std::string policy_text,
                         const review::Policy& policy, const review::ReviewResult& result,
                         const db::ReadReport& report) {
   results::RunRow row;
+  row.scenario = std::move(scenario);
   row.as_of = as_of.to_iso();
   row.started_at = std::move(started_at);
   row.finished_at = now_utc_iso(true);
@@ -89,6 +92,7 @@ Date today_utc() {
 }
 
 RunSummary run_review(db::Connection& db, const ReviewOptions& options) {
+  if (options.scenario) require_scenario_name(*options.scenario, "scenario");
   std::string started_at = now_utc_iso();
   std::string policy_text = policy_text_of(db, options);
   const review::Policy policy = formats::read_policy(policy_text);
@@ -115,9 +119,10 @@ RunSummary run_review(db::Connection& db, const ReviewOptions& options) {
     doing(kStoring, [&] {
       tx.emplace(db, db::Transaction::Kind::immediate);
       db::migrate(db);
-      writer.emplace(
-          db, run_row(as_of, std::move(started_at), std::move(policy_text), policy, result, report),
-          data, result);
+      writer.emplace(db,
+                     run_row(as_of, options.scenario, std::move(started_at), std::move(policy_text),
+                             policy, result, report),
+                     data, result);
     });
     review::analyse_assets(data, policy, result, options.progress,
                            [&](std::span<const review::AssetReview> done) {
@@ -132,6 +137,7 @@ RunSummary run_review(db::Connection& db, const ReviewOptions& options) {
     summary.commit_seconds = seconds_since(commit_start);
   }
   summary.as_of = as_of.to_iso();
+  summary.scenario = options.scenario;
   summary.rows_read = report.rows_read;
   summary.rows_rejected = static_cast<std::int64_t>(report.rejected.size());
   summary.rows_after_as_of = report.rows_after_as_of;

@@ -10,6 +10,11 @@
 //   db::Connection db = db::Connection::open("fleet.db");
 //   RunSummary s = run_review(db, {.policy_json = text, .as_of = as_of});
 //   s.run_id; s.due; s.newly_due;
+//   run_review(db, {.policy_json = dearer, .scenario = "price-up"});   // a what-if run
+//
+// A run with a scenario is a what-if run (tenure_run.scenario): stored like any other, but the
+// nightly views and the default run of explain and the report follow the baseline runs only
+// (db/schema.h).
 #pragma once
 
 #include <cstdint>
@@ -33,6 +38,8 @@ struct ReviewOptions {
   // A cost-event table whose rowids span at least this many is read in two halves at once
   // where that is safe (db/cost_ranges.h); tests lower it to read small tables so.
   std::int64_t split_min_rows = db::kSplitMinRows;
+  // nullopt: a baseline run; else the what-if run's name (core/checks.h, require_scenario_name).
+  std::optional<std::string> scenario = std::nullopt;
 };
 
 struct RunSummary {
@@ -43,8 +50,12 @@ struct RunSummary {
   std::int64_t rows_after_as_of = 0;
   std::int64_t assets_reviewed = 0;
   std::int64_t keep = 0, review = 0, replace = 0;
-  std::int64_t due = 0;        // review + replace
-  std::int64_t newly_due = 0;  // due now, not due in the previous successful run
+  std::optional<std::string> scenario;  // as given; nullopt for a baseline run
+  std::int64_t due = 0;                 // review + replace
+  // Due now, not due in the run it is compared with: for a baseline run the baseline run before
+  // it (by as_of, then run_id), for a what-if run the latest baseline run
+  // (db::count_newly_due).
+  std::int64_t newly_due = 0;
   replacement::Basis basis = replacement::Basis::after_tax;
   results::MoneyTerms money = results::MoneyTerms::nominal;
   // Wall time of the phases, in seconds: reading the inputs; building the models, analysing the
@@ -52,8 +63,9 @@ struct RunSummary {
   double read_seconds = 0, analyse_write_seconds = 0, commit_seconds = 0;
 };
 
-// Throws InputError for a bad policy, a missing relation or column, or no policy at all;
-// RuntimeFailure when the database cannot be read or written.
+// Throws InputError for a bad policy, a missing relation or column, no policy at all, or a
+// scenario name that breaks require_scenario_name (naming "scenario"), before anything is read
+// or written; RuntimeFailure when the database cannot be read or written.
 RunSummary run_review(db::Connection& db, const ReviewOptions& options);
 
 // Today's date in UTC.

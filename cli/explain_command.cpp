@@ -48,7 +48,7 @@ void add_explain_command(CLI::App& app, const Console& console) {
       "explain", "One asset's whole computation from a stored run, as tables a person can audit");
   command->add_option("--db", o->db, "the maintenance database (SQLite file)")->required();
   command->add_option("ASSET", o->asset, "the asset_id to explain")->required();
-  command->add_option("--run", o->run, "the run to read; default: the latest successful run")
+  command->add_option("--run", o->run, "the run to read; default: the latest baseline run")
       ->type_name("N");
   command->add_option("--format", o->format, "text (the default) or json")
       ->type_name("FORMAT")

@@ -52,7 +52,7 @@ void add_report_command(CLI::App& app, const Console& console) {
   command->add_option("--db", o->db, "the maintenance database (SQLite file)")->required();
   command->add_option("--out", o->out, "the HTML file to write; - writes the page to standard output")
       ->required();
-  command->add_option("--run", o->run, "the run to report; default: the latest successful run")
+  command->add_option("--run", o->run, "the run to report; default: the latest baseline run")
       ->type_name("N");
   command->footer(
       "One self-contained file: inline styles and SVG charts, no script, nothing fetched from\n"

@@ -1,6 +1,8 @@
 // `tenure review`: the nightly run on a maintenance database (SPEC 6 to 8). Reads the stored or
 // given policy, reviews every asset, writes the results in one transaction, and ends with a
-// summary: a table for people, or JSON with --format json.
+// summary: a table for people, or JSON with --format json. With --scenario NAME the run is a
+// what-if run: stored under that name, left out of the nightly views (db/schema.h), its "newly
+// due" compared with the latest baseline run.
 #include <unistd.h>
 
 #include <cstdio>
@@ -13,6 +15,7 @@
 
 #include "cli/commands.h"
 #include "cli/input_file.h"
+#include "core/checks.h"
 #include "core/errors.h"
 #include "app/review_run.h"
 #include "formats/caution.h"
@@ -25,6 +28,7 @@ struct ReviewCommandOptions {
   std::string db;
   std::string policy_file;
   std::string as_of;
+  std::optional<std::string> scenario;
   std::string format = "table";
   bool quiet = false;
 };
@@ -38,6 +42,9 @@ Date parse_as_of(const std::string& text) {
 std::string summary_table(const app::RunSummary& s) {
   formats::TextTable t({"", ""}, 2);
   t.add_row({"run", std::to_string(s.run_id)});
+  if (s.scenario) {
+    t.add_row({"scenario", *s.scenario + " (a what-if run: the nightly views ignore it)"});
+  }
   t.add_row({"as of", s.as_of});
   t.add_row({"basis", s.basis == replacement::Basis::after_tax ? "after tax" : "before tax"});
   t.add_row({"money", s.money == results::MoneyTerms::real
@@ -51,7 +58,8 @@ std::string summary_table(const app::RunSummary& s) {
   t.add_row({"review", std::to_string(s.review)});
   t.add_row({"replace", std::to_string(s.replace)});
   t.add_row({"due (review + replace)", std::to_string(s.due)});
-  t.add_row({"newly due", std::to_string(s.newly_due)});
+  t.add_row({"newly due", std::to_string(s.newly_due) +
+                              (s.scenario ? " (not due in the latest baseline run)" : "")});
   t.add_row({"time", fmt::format("read {:.2f} s, analyse and write {:.2f} s, commit {:.2f} s",
                                  s.read_seconds, s.analyse_write_seconds, s.commit_seconds)});
   return t.render();
@@ -59,6 +67,7 @@ std::string summary_table(const app::RunSummary& s) {
 
 nlohmann::json summary_json(const app::RunSummary& s) {
   return {{"run_id", s.run_id},           {"as_of", s.as_of},
+          {"scenario", s.scenario ? nlohmann::json(*s.scenario) : nlohmann::json(nullptr)},
           {"basis", replacement::to_string(s.basis)},
           {"money", results::to_string(s.money)},
           {"rows_read", s.rows_read},     {"rows_rejected", s.rows_rejected},
@@ -72,10 +81,29 @@ nlohmann::json summary_json(const app::RunSummary& s) {
                        {"commit", s.commit_seconds}}}};
 }
 
+std::string nightly_note(const app::RunSummary& s) {
+  return fmt::format(
+      "See the views tenure_latest, tenure_due, tenure_newly_due and tenure_class_latest;\n"
+      "rejected rows are in tenure_rejected (run_id {}).\n",
+      s.run_id);
+}
+
+std::string what_if_note(const app::RunSummary& s) {
+  return fmt::format(
+      "This is a what-if run (scenario '{0}'): the nightly views tenure_latest, tenure_due,\n"
+      "tenure_newly_due and tenure_class_latest ignore it and still show the latest baseline\n"
+      "run. Compare it with that run in tenure_scenario_diff (WHERE scenario = '{0}'), or read\n"
+      "it with 'tenure explain --run {1}' and 'tenure report --run {1}'; rejected rows are in\n"
+      "tenure_rejected (run_id {1}).\n",
+      *s.scenario, s.run_id);
+}
+
 void run(const ReviewCommandOptions& o, const Console& console) {
   app::ReviewOptions options;
   if (!o.policy_file.empty()) options.policy_json = read_input_file(o.policy_file, console.in);
   if (!o.as_of.empty()) options.as_of = parse_as_of(o.as_of);
+  if (o.scenario) require_scenario_name(*o.scenario, "--scenario");
+  options.scenario = o.scenario;
   const bool show_progress = !o.quiet && ::isatty(STDERR_FILENO);
   if (show_progress) {
     options.progress = [&console](std::size_t done, std::size_t total) {
@@ -89,10 +117,9 @@ void run(const ReviewCommandOptions& o, const Console& console) {
     console.out << summary_json(summary).dump(2) << '\n';
     return;
   }
-  console.out << "tenure review: done\n" << summary_table(summary)
-              << "\nSee the views tenure_latest, tenure_due, tenure_newly_due and "
-                 "tenure_class_latest;\nrejected rows are in tenure_rejected (run_id "
-              << summary.run_id << ").\n\n"
+  console.out << "tenure review: done\n"
+              << summary_table(summary) << '\n'
+              << (summary.scenario ? what_if_note(summary) : nightly_note(summary)) << '\n'
               << formats::kCaution << '\n';
 }
 
@@ -106,6 +133,11 @@ void add_review_command(CLI::App& app, const Console& console) {
   command->add_option("--policy", o->policy_file,
                       "policy file (JSON); default: the latest policy stored in the database");
   command->add_option("--as-of", o->as_of, "review as of this date (YYYY-MM-DD); default: today (UTC)");
+  command
+      ->add_option("--scenario", o->scenario,
+                   "store a what-if run under this name (1 to 64 letters, digits, '-', '_', "
+                   "'.'); the nightly views ignore it")
+      ->type_name("NAME");
   command->add_option("--format", o->format, "table (the default) or json, for the summary")
       ->type_name("FORMAT")
       ->check(CLI::IsMember({"table", "json"}));
@@ -115,11 +147,16 @@ void add_review_command(CLI::App& app, const Console& console) {
       "asset_valuation) without writing them, fits each class's cost and value curves, weighs\n"
       "every asset in service against its class's challenger, and writes one run into the\n"
       "tenure_* tables in one transaction. Bad rows are skipped into tenure_rejected.\n"
+      "With --scenario NAME the run is a what-if run: stored, shown in tenure_scenario_diff\n"
+      "against the latest baseline run, and ignored by tenure_latest, tenure_due,\n"
+      "tenure_newly_due and tenure_class_latest; its newly due counts the assets due in it\n"
+      "that are not due in the latest baseline run.\n"
       "Exit codes: 0 done, 1 the database could not be read or written, 2 bad policy or input.\n"
       "\n"
       "Examples:\n"
       "  tenure review --db fleet.db\n"
-      "  tenure review --db fleet.db --policy policy.json --as-of 2026-11-30 --format json");
+      "  tenure review --db fleet.db --policy policy.json --as-of 2026-11-30 --format json\n"
+      "  tenure review --db fleet.db --policy dearer-vans.json --scenario price-up");
   command->callback([o, console] { run(*o, console); });
 }
 

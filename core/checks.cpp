@@ -53,4 +53,25 @@ bool is_plain_identifier(std::string_view name) {
   return true;
 }
 
+void require_scenario_name(std::string_view name, std::string_view where) {
+  if (name.empty()) {
+    throw InputError(std::string(where),
+                     "must not be empty (a name of letters, digits, '-', '_' and '.')");
+  }
+  if (name.size() > 64) {
+    const std::string size = std::to_string(name.size());
+    throw InputError(std::string(where), "must be at most 64 characters (it has " + size + ")");
+  }
+  for (std::size_t i = 0; i < name.size(); ++i) {
+    const char c = name[i];
+    const bool allowed = (c >= 'A' && c <= 'Z') || (c >= 'a' && c <= 'z') ||
+                         (c >= '0' && c <= '9') || c == '-' || c == '_' || c == '.';
+    if (!allowed) {
+      const std::string rule = "may hold only letters, digits, '-', '_' and '.' (character " +
+                               std::to_string(i + 1) + " is not one)";
+      throw InputError(std::string(where), rule);
+    }
+  }
+}
+
 }  // namespace tenure

@@ -2,6 +2,7 @@
 //
 //   require_finite(x, "$.marr");              // rejects NaN and infinities
 //   require_rate(i, "i");                     // finite and > -1
+//   require_scenario_name(name, "--scenario"); // 1 to 64 of [A-Za-z0-9._-]
 #pragma once
 
 #include <string_view>
@@ -30,5 +31,10 @@ void require_tax_rate(Rate value, std::string_view where);
 // A plain SQL identifier: [A-Za-z_][A-Za-z0-9_]*, at most 128 characters. Policy sources must be
 // one, so that nothing a policy says can change the SQL tenure runs.
 bool is_plain_identifier(std::string_view name);
+
+// A what-if run's name (tenure_run.scenario): 1 to 64 characters, each an ASCII letter, a digit,
+// '-', '_' or '.', so that it reads plainly in a summary, a file name or a WHERE clause. Throws
+// InputError(where, rule) with the rule it broke: empty, too long, or which character is not one.
+void require_scenario_name(std::string_view name, std::string_view where);
 
 }  // namespace tenure

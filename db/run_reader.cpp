@@ -35,6 +35,12 @@ std::vector<Row> rows_where(Connection& db, const results::Table<Row>& table,
   return out;
 }
 
+// The run that run ?1's "newly due" compares with (run_reader.h): for a baseline run, the
+// baseline run just before it in tenure_run_order; for a what-if run, the latest baseline run.
+constexpr const char* kComparedRun =
+    "(SELECT CASE WHEN scenario IS NULL THEN previous_run_id "
+    "ELSE (SELECT run_id FROM tenure_latest_run) END FROM tenure_run_order WHERE run_id = ?1)";
+
 template <class Row>
 std::optional<Row> first(std::vector<Row> rows) {
   if (rows.empty()) return std::nullopt;
@@ -47,14 +53,16 @@ results::RunRow read_run(Connection& db, std::optional<std::int64_t> run_id) {
   if (!has_results_schema(db)) {
     throw InputError("--db", "no review run in this database (run 'tenure review' first)");
   }
+  // The latest baseline run as the views define it (schema.h, tenure_latest_run).
   Statement q(db, select_sql(results::run_table()) +
                       " WHERE status = 'ok' AND run_id = coalesce(?1, "
-                      "(SELECT max(run_id) FROM tenure_run WHERE status = 'ok'))");
+                      "(SELECT run_id FROM tenure_latest_run))");
   q.bind(1, run_id);
   if (!q.step()) {
     if (run_id) throw InputError("--run", fmt::format("no successful run {}", *run_id));
-    throw InputError("--db", "no successful review run in this database (run 'tenure review' "
-                             "first)");
+    throw InputError("--db",
+                     "no successful baseline review run in this database (run 'tenure review' "
+                     "without --scenario first, or name a what-if run with --run)");
   }
   return read_row(q, results::run_table());
 }
@@ -98,10 +106,9 @@ std::vector<results::RejectedRow> read_rejected(Connection& db, std::int64_t run
 }
 
 std::unordered_set<std::string> due_in_previous_run(Connection& db, std::int64_t run_id) {
-  Statement q(db,
-              "SELECT asset_id FROM tenure_asset_result WHERE verdict IN ('review', 'replace') "
-              "AND run_id = (SELECT max(run_id) FROM tenure_run WHERE status = 'ok' AND "
-              "run_id < ?1)");
+  Statement q(db, std::string("SELECT asset_id FROM tenure_asset_result WHERE verdict IN "
+                              "('review', 'replace') AND run_id = ") +
+                      kComparedRun);
   q.bind(1, run_id);
   std::unordered_set<std::string> out;
   while (q.step()) out.emplace(q.text(0));
@@ -109,7 +116,11 @@ std::unordered_set<std::string> due_in_previous_run(Connection& db, std::int64_t
 }
 
 std::int64_t count_newly_due(Connection& db, std::int64_t run_id) {
-  Statement q(db, "SELECT count(*) FROM tenure_newly_due WHERE run_id = ?1");
+  Statement q(db, std::string("SELECT count(*) FROM tenure_asset_result AS d WHERE d.run_id = ?1 "
+                              "AND d.verdict IN ('review', 'replace') AND NOT EXISTS ("
+                              "SELECT 1 FROM tenure_asset_result AS p WHERE p.asset_id = "
+                              "d.asset_id AND p.verdict IN ('review', 'replace') AND p.run_id = ") +
+                      kComparedRun + ")");
   q.bind(1, run_id);
   q.step();
   return q.integer(0);

@@ -4,7 +4,7 @@
 // as results/rows.h holds them, through each table's generated SELECT (db/table_sql.h). Every
 // value is bound; the results tables and the input relations are only read.
 //
-//   results::RunRow run = read_run(db, std::nullopt);   // the latest successful run
+//   results::RunRow run = read_run(db, std::nullopt);   // the latest baseline run
 //   auto asset = read_asset_result(db, run.run_id, "PU-0042");
 //   auto input = read_input_asset(db, policy.sources, "PU-0042");
 //
@@ -27,9 +27,10 @@
 
 namespace tenure::db {
 
-// The run `run_id`, or the latest successful one. Throws InputError naming "--db" when the
-// database holds no successful run (or no results schema), and "--run" when run_id is not a
-// successful run.
+// The run `run_id` (a baseline or a what-if run), or by default the latest baseline run, the
+// one the views show (schema.h, tenure_latest_run: latest by as_of, then run_id). Throws
+// InputError naming "--db" when the database holds no successful baseline run (or no results
+// schema), and "--run" when run_id is not a successful run.
 results::RunRow read_run(Connection& db, std::optional<std::int64_t> run_id);
 
 // One asset's result row in the run; nullopt when the run did not review that asset id.
@@ -51,11 +52,14 @@ std::vector<results::CurveRow> read_challenger_curves(Connection& db, std::int64
 std::vector<results::RejectedRow> read_rejected(Connection& db, std::int64_t run_id,
                                                 std::size_t limit);
 
-// The ids of the assets due (review or replace) in the latest successful run before `run_id`;
-// empty when there is none, so every asset due now is newly due (as the view tenure_newly_due).
+// The ids of the assets due (review or replace) in the run that `run_id` is compared with: for
+// a baseline run, the baseline run just before it by as_of, then run_id (as the view
+// tenure_newly_due compares the latest); for a what-if run, the latest baseline run. Empty when
+// there is none, so every asset due now is newly due.
 std::unordered_set<std::string> due_in_previous_run(Connection& db, std::int64_t run_id);
 
-// How many assets of the run the view tenure_newly_due lists.
+// How many assets due in the run were not due in the run it is compared with (as above); for
+// the latest baseline run, the number of rows of the view tenure_newly_due.
 std::int64_t count_newly_due(Connection& db, std::int64_t run_id);
 
 // The asset's row in the relation sources.assets and its events in sources.costs (SELECT ...

@@ -28,9 +28,6 @@ constexpr std::array<std::string_view, 15> kClassLatestColumns = {
     "cost_g",          "cost_r2",         "asset_years",          "value_model",
     "value_start",     "value_decline",   "valuations_used"};
 
-constexpr std::string_view kLatestRun =
-    "run_id = (SELECT max(run_id) FROM tenure_run WHERE status = 'ok')";
-
 // "a, b, c": the contract's columns first, then the table's other columns shown in views, in
 // lines of at most 100 columns after "  SELECT ".
 template <class Row, std::size_t N>
@@ -60,12 +57,28 @@ std::string view_columns(const std::array<std::string_view, N>& contract,
   return out;
 }
 
+// The one definition of "latest" (the order of tenure_run_order: by as_of, then run_id, within
+// a run's scenario, baseline runs being the scenario NULL), which every view below and
+// db::read_run (run_reader.cpp) read through tenure_latest_run.
 std::string views_sql() {
   return fmt::format(R"sql(
+CREATE VIEW tenure_run_order AS
+  SELECT run_id, as_of, scenario,
+         row_number() OVER newest_first AS recency,
+         lead(run_id) OVER newest_first AS previous_run_id
+  FROM tenure_run
+  WHERE status = 'ok'
+  WINDOW newest_first AS (PARTITION BY scenario ORDER BY as_of DESC, run_id DESC);
+
+CREATE VIEW tenure_latest_run AS
+  SELECT run_id, as_of, previous_run_id
+  FROM tenure_run_order
+  WHERE scenario IS NULL AND recency = 1;
+
 CREATE VIEW tenure_latest AS
   SELECT {0}
   FROM tenure_asset_result
-  WHERE {2};
+  WHERE run_id = (SELECT run_id FROM tenure_latest_run);
 
 CREATE VIEW tenure_due AS
   SELECT * FROM tenure_latest WHERE verdict IN ('replace', 'review');
@@ -74,23 +87,37 @@ CREATE VIEW tenure_newly_due AS
   SELECT d.* FROM tenure_due AS d
   WHERE NOT EXISTS (
     SELECT 1 FROM tenure_asset_result AS p
-    WHERE p.run_id = (SELECT max(run_id) FROM tenure_run
-                      WHERE status = 'ok' AND run_id < d.run_id)
+    WHERE p.run_id = (SELECT previous_run_id FROM tenure_latest_run)
       AND p.asset_id = d.asset_id
       AND p.verdict IN ('replace', 'review'));
 
 CREATE VIEW tenure_class_latest AS
   SELECT {1}
   FROM tenure_class_result
-  WHERE {2};
+  WHERE run_id = (SELECT run_id FROM tenure_latest_run);
+
+CREATE VIEW tenure_scenario_diff AS
+  SELECT s.scenario, b.run_id AS baseline_run_id, s.run_id AS scenario_run_id,
+         b.asset_id, b.asset_class,
+         b.verdict AS baseline_verdict, a.verdict AS scenario_verdict,
+         b.replace_after_years AS baseline_replace_after_years,
+         a.replace_after_years AS scenario_replace_after_years,
+         b.delay_cost AS baseline_delay_cost, a.delay_cost AS scenario_delay_cost,
+         a.verdict IS NOT b.verdict AS verdict_differs
+  FROM tenure_latest AS b
+  JOIN tenure_run_order AS s ON s.scenario IS NOT NULL AND s.recency = 1
+  LEFT JOIN tenure_asset_result AS a ON a.run_id = s.run_id AND a.asset_id = b.asset_id;
 )sql",
                      view_columns(kLatestColumns, results::asset_table()),
-                     view_columns(kClassLatestColumns, results::class_table()), kLatestRun);
+                     view_columns(kClassLatestColumns, results::class_table()));
 }
 
+// Dependent views first.
 constexpr std::string_view kDropViews =
-    "DROP VIEW IF EXISTS tenure_newly_due; DROP VIEW IF EXISTS tenure_due; "
-    "DROP VIEW IF EXISTS tenure_latest; DROP VIEW IF EXISTS tenure_class_latest;";
+    "DROP VIEW IF EXISTS tenure_scenario_diff; DROP VIEW IF EXISTS tenure_newly_due; "
+    "DROP VIEW IF EXISTS tenure_due; DROP VIEW IF EXISTS tenure_latest; "
+    "DROP VIEW IF EXISTS tenure_class_latest; DROP VIEW IF EXISTS tenure_latest_run; "
+    "DROP VIEW IF EXISTS tenure_run_order;";
 
 // Calls f(table) for each stored table, in the order they are created.
 template <class F>

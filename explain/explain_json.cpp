@@ -179,6 +179,7 @@ json explanation_to_json(const Explanation& e) {
               {"run",
                {{"run_id", e.run.run_id},
                 {"as_of", e.run.as_of},
+                {"scenario", e.run.scenario ? json(*e.run.scenario) : json(nullptr)},
                 {"basis", replacement::to_string(e.run.basis)},
                 {"money", results::to_string(e.run.money)},
                 {"tenure_version", e.run.tenure_version},

@@ -238,8 +238,8 @@ std::string headline(const Explanation& e) {
   const review::AssetReview& r = e.review;
   const std::string verdict = review::verdict_headline(r.finding);
   std::string out = fmt::format(
-      "tenure explain: asset {} (class {}), run {} as of {}\n\nVerdict: {}, {} basis\n  {}\n",
-      e.stored.asset_id, e.stored.asset_class, e.run.run_id, e.run.as_of, verdict,
+      "tenure explain: asset {} (class {}), {} as of {}\n\nVerdict: {}, {} basis\n  {}\n",
+      e.stored.asset_id, e.stored.asset_class, run_name(e.run), e.run.as_of, verdict,
       text::basis_words(r.basis), r.finding.reason);
   if (e.reproduced()) {
     out += "Check: the stored figures (EUACs, next year's marginal cost, k*, verdict, reason) are "

@@ -1,6 +1,8 @@
 // One asset's whole computation (see explanation.h).
 #include "explain/explanation.h"
 
+#include <fmt/format.h>
+
 #include "core/errors.h"
 #include "explain/rebuild.h"
 #include "formats/policy_json.h"
@@ -10,6 +12,11 @@ namespace tenure::explain {
 Rate Explanation::basis_rate() const {
   return review.basis == replacement::Basis::after_tax ? policy->rates.after_tax_marr
                                                        : policy->rates.marr;
+}
+
+std::string run_name(const results::RunRow& run) {
+  if (run.scenario) return fmt::format("what-if run {} '{}'", run.run_id, *run.scenario);
+  return fmt::format("run {}", run.run_id);
 }
 
 std::shared_ptr<const review::Policy> run_policy(const results::RunRow& run) {

@@ -44,6 +44,10 @@ struct Explanation {
 // "policy_json" when it no longer reads.
 std::shared_ptr<const review::Policy> run_policy(const results::RunRow& run);
 
+// How explain and the report name a run: "run 3" for a baseline run, "what-if run 4
+// 'price-up'" for a what-if run (tenure_run.scenario), so a reader never takes one for the other.
+std::string run_name(const results::RunRow& run);
+
 // `policy` is run_policy(run). Throws RuntimeFailure when the class row cannot be rebuilt.
 Explanation explain_asset(results::RunRow run, std::shared_ptr<const review::Policy> policy,
                           results::ClassRow stored_class, results::AssetRow stored,

@@ -80,7 +80,8 @@ int tenure_review_db(sqlite3* db, const char* policy_json, const char* as_of, lo
     tenure::plugin::require_pointer(db, "db");
     tenure::plugin::require_pointer(run_id, "run_id");
     *run_id = tenure::plugin::review_on(db, tenure::plugin::optional_text(policy_json),
-                                        tenure::plugin::optional_text(as_of));
+                                        tenure::plugin::optional_text(as_of),
+                                        /*scenario=*/std::nullopt);  // baseline runs only
   });
 }
 

@@ -61,6 +61,7 @@ constexpr FunctionEntry kFunctions[] = {
     {"tenure_case", 1, kPure, case_function},
     {"tenure_review", 1, kReadsAndWritesTables, review_function},
     {"tenure_review", 2, kReadsAndWritesTables, review_function},
+    {"tenure_review", 3, kReadsAndWritesTables, review_function},
 };
 
 int register_all(sqlite3* db) {

@@ -9,7 +9,7 @@
 //   depreciation_table.cpp    tenure_depreciation(method, basis, salvage, life[, rate,
 //                             switch_to_straight_line, dispose_in_year])  (table-valued)
 //   case_function.cpp         tenure_case(case_json)
-//   review_function.cpp       tenure_review(policy_json[, as_of])
+//   review_function.cpp       tenure_review(policy_json[, as_of[, scenario]])
 #pragma once
 
 #include <sqlite3.h>

@@ -22,9 +22,11 @@ void refuse_inside_writing_statement(sqlite3* db) {
 }  // namespace
 
 std::int64_t review_on(sqlite3* db, const std::optional<std::string>& policy_json,
-                       const std::optional<std::string>& as_of) {
+                       const std::optional<std::string>& as_of,
+                       const std::optional<std::string>& scenario) {
   app::ReviewOptions options;
   options.policy_json = policy_json;
+  options.scenario = scenario;
   if (as_of) {
     options.as_of = parse_iso_date(*as_of);
     if (!options.as_of) throw InputError("as_of", "must be a date 'YYYY-MM-DD'");

@@ -11,7 +11,8 @@
 // tenure_review(...)) cannot hold a savepoint or a commit of another statement, so the review
 // refuses to run inside one, before reading anything.
 //
-//   std::int64_t run_id = review_on(db, std::nullopt, "2026-06-30");   // the stored policy
+//   // The stored policy, a baseline run:
+//   std::int64_t run_id = review_on(db, std::nullopt, "2026-06-30", std::nullopt);
 #pragma once
 
 #include <sqlite3.h>
@@ -23,10 +24,13 @@
 namespace tenure::plugin {
 
 // Runs the review and returns the new run's id. policy_json: nullopt for the latest policy stored
-// in the database; as_of: 'YYYY-MM-DD', nullopt for today (UTC). Throws InputError naming
-// "as_of" for a bad date, InputError("", ...) inside a writing statement, and what run_review
-// throws (InputError for a bad policy or a missing relation, RuntimeFailure for the database).
+// in the database; as_of: 'YYYY-MM-DD', nullopt for today (UTC); scenario: nullopt for a
+// baseline run, else the what-if run's name (app/review_run.h). Throws InputError naming "as_of"
+// for a bad date, InputError("", ...) inside a writing statement, and what run_review throws
+// (InputError for a bad policy, a missing relation or a bad scenario name, naming "scenario";
+// RuntimeFailure for the database).
 std::int64_t review_on(sqlite3* db, const std::optional<std::string>& policy_json,
-                       const std::optional<std::string>& as_of);
+                       const std::optional<std::string>& as_of,
+                       const std::optional<std::string>& scenario);
 
 }  // namespace tenure::plugin

@@ -1,9 +1,12 @@
-// tenure_review(policy_json[, as_of]): the nightly review (`tenure review`) run on the calling
-// connection, from SQL. It reads the fleet relations the policy names (asset, cost_event,
-// asset_valuation by default), writes one run into the tenure_* tables, and returns the new
-// run's id; the views tenure_latest, tenure_due, tenure_newly_due and tenure_class_latest then
-// show it. policy_json NULL uses the latest policy stored in the database (tenure_policy, as
-// `tenure policy set` stores it); as_of is 'YYYY-MM-DD', today (UTC) when left out or NULL.
+// tenure_review(policy_json[, as_of[, scenario]]): the nightly review (`tenure review`) run on
+// the calling connection, from SQL. It reads the fleet relations the policy names (asset,
+// cost_event, asset_valuation by default), writes one run into the tenure_* tables, and returns
+// the new run's id; the views tenure_latest, tenure_due, tenure_newly_due and
+// tenure_class_latest then show it when it is the latest baseline run (by as_of, then run_id).
+// policy_json NULL uses the latest policy stored in the database (tenure_policy, as `tenure
+// policy set` stores it); as_of is 'YYYY-MM-DD', today (UTC) when left out or NULL. scenario,
+// when given and not NULL, makes it a what-if run of that name (`tenure review --scenario`):
+// the nightly views ignore it and tenure_scenario_diff compares it with the latest baseline run.
 //
 // Usage (on the invented demo fleet of `tenure demo --db demo.db`, which stores its policy):
 //   SELECT tenure_review(NULL, '2026-11-30');                        -- 1, the new run's id
@@ -15,6 +18,9 @@
 //     FLT-00049|replace
 //     FLT-00051|replace
 //   SELECT tenure_review(readfile('policy.json'), '2026-11-30');    -- 2: a policy from a file
+//   SELECT tenure_review(readfile('price-up.json'), '2026-11-30', 'price-up');  -- 3: a what-if run
+//   SELECT scenario, sum(verdict_differs) FROM tenure_scenario_diff GROUP BY scenario;
+//     price-up|52           (price-up.json: the demo policy with every challenger price 20% up)
 //
 // Transactions (review_call.h): called in autocommit mode, the review commits its run itself;
 // called inside BEGIN ... COMMIT it joins that transaction through a SAVEPOINT, so a ROLLBACK
@@ -24,6 +30,7 @@
 //   tenure_review: cannot run inside a statement that writes; call it from a SELECT
 // Other errors name the argument or the JSON path in the policy:
 //   tenure_review: 2nd argument (as_of) must be a date 'YYYY-MM-DD'
+//   tenure_review: 3rd argument (scenario) may hold only letters, digits, '-', '_' and '.' (...)
 //   tenure_review: $.marr: must be > 0
 //   tenure_review: policy: no policy given and none stored in the database (...)
 //
@@ -36,7 +43,7 @@
 namespace tenure::plugin {
 namespace {
 
-const Signature kReview{"tenure_review", {"policy_json", "as_of"}};
+const Signature kReview{"tenure_review", {"policy_json", "as_of", "scenario"}};
 
 }  // namespace
 
@@ -51,7 +58,8 @@ void review_function(sqlite3_context* context, int argc, sqlite3_value** argv) {
       as_of = args.text("as_of");
     }
     const std::int64_t run_id =
-        review_on(sqlite3_context_db_handle(context), args.optional_text("policy_json"), as_of);
+        review_on(sqlite3_context_db_handle(context), args.optional_text("policy_json"), as_of,
+                  args.optional_text("scenario"));
     sqlite3_result_int64(context, run_id);
   });
 }

@@ -6,6 +6,7 @@
 #include <fmt/format.h>
 
 #include "core/errors.h"
+#include "explain/explanation.h"
 #include "explain/rebuild.h"
 #include "formats/text_table.h"
 #include "report/html.h"
@@ -75,8 +76,8 @@ std::string money_cell(const std::optional<Money>& amount) {
 
 std::string render_report(const ReportData& data) {
   const PageModel m = build_model(data);
-  const std::string title = fmt::format("Equipment replacement review, run {} as of {}",
-                                        data.run.run_id, data.run.as_of);
+  const std::string title = fmt::format("Equipment replacement review, {} as of {}",
+                                        explain::run_name(data.run), data.run.as_of);
   return fmt::format(
       "<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n"
       // Nothing may be fetched: no scripts, fonts, images or connections; styles are inline.

@@ -2,6 +2,7 @@
 // page_model.h).
 #include <fmt/format.h>
 
+#include "explain/explanation.h"
 #include "formats/caution.h"
 #include "formats/text_table.h"
 #include "report/html.h"
@@ -80,13 +81,13 @@ std::string run_header(const PageModel& m) {
           : std::string("<b>nominal</b>: costs as recorded, so the MARR is a nominal rate");
   return fmt::format(
       "<header class=\"run\"><p class=\"kicker\">Equipment replacement review &middot; "
-      "decision support</p><h1>Which units to keep, review or replace: run {}, as of {}</h1>"
+      "decision support</p><h1>Which units to keep, review or replace: {}, as of {}</h1>"
       "<ul class=\"facts\"><li>Decision basis <b>{}</b></li><li>MARR <b>{}</b> before tax, "
       "<b>{}</b> after tax</li><li>Income tax <b>{}</b></li><li>Lead time <b>{}</b></li>"
       "<li>Review margin <b>{}</b></li>"
       "<li>Money {}</li><li>Amounts in <b>money units</b> as recorded in the database</li></ul>"
       "</header>",
-      run.run_id, escape(run.as_of), m.after_tax() ? "after tax" : "before tax",
+      escape(explain::run_name(run)), escape(run.as_of), m.after_tax() ? "after tax" : "before tax",
       formats::percent(p.rates.marr), formats::percent(p.rates.after_tax_marr),
       formats::percent(p.rates.income_tax_rate), formats::years(p.lead_time_years),
       formats::percent(p.review_margin), money);

@@ -4,7 +4,7 @@
 // and explain/ and report/ work on them without touching SQLite. Stored words (verdict, basis,
 // money, models, role) are enums here, parsed once when a row is read.
 //
-//   RunRow run = db::read_run(db, std::nullopt);           // the latest successful run
+//   RunRow run = db::read_run(db, std::nullopt);           // the latest baseline run
 //   AssetRow asset = *db::read_asset_result(db, run.run_id, "PU-0042");
 //   asset.defender_euac;    // the figure explain must reproduce exactly
 //   asset.due();            // verdict is review or replace
@@ -51,6 +51,9 @@ struct RunRow {
   std::int64_t assets_not_yet_in_service = 0;
   std::int64_t rows_after_as_of = 0;  // events and valuations dated after as_of: not counted
   std::string tenure_version;
+  // The what-if run's name (`tenure review --scenario`); none for a baseline run, the only runs
+  // the nightly views follow (db/schema.h).
+  std::optional<std::string> scenario;
 };
 
 // The rows below belong to one run: their tables key them by run_id (results/tables.h), which

@@ -31,6 +31,9 @@ constexpr Column<RunRow> kRunColumns[] = {
         "rows_after_as_of", "INTEGER NOT NULL",
         {.note = "events and valuations dated after as_of: not counted"}),
     column<&RunRow::tenure_version>("tenure_version", "TEXT NOT NULL"),
+    column<&RunRow::scenario>(
+        "scenario", "TEXT",
+        {.note = "NULL: a baseline run; else the what-if run's name", .since = 2}),
 };
 
 constexpr Column<ClassRow> kClassColumns[] = {

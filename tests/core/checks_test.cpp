@@ -211,5 +211,47 @@ TEST(IsPlainIdentifier, LettersDigitsUnderscoresUpTo128) {
   }
 }
 
+// Empty: accepted. Otherwise the rule it is refused with, exactly (core/checks.h states it).
+struct ScenarioRow {
+  const char* comment;
+  std::string name;
+  std::string refused_with;
+};
+
+TEST(RequireScenarioName, OneToSixtyFourLettersDigitsHyphensUnderscoresDots) {
+  const std::string kOnly = "may hold only letters, digits, '-', '_' and '.' (character ";
+  const std::vector<ScenarioRow> rows = {
+      {"one letter", "a", ""},
+      {"every kind of character", "Q4.budget_2027-high", ""},
+      {"digits only", "2027", ""},
+      {"dots only", "..", ""},
+      {"64 characters, the limit", std::string(64, 'z'), ""},
+      {"65 characters, one too many", std::string(65, 'z'),
+       "must be at most 64 characters (it has 65)"},
+      {"empty", "", "must not be empty (a name of letters, digits, '-', '_' and '.')"},
+      {"a space, the 5th character", "next year", kOnly + "5 is not one)"},
+      {"a slash first", "/tmp", kOnly + "1 is not one)"},
+      {"a quote", "x'y", kOnly + "2 is not one)"},
+      {"a non-ASCII letter (UTF-8 e acute), its first byte the 4th", "caf\xc3\xa9",
+       kOnly + "4 is not one)"},
+      {"an embedded NUL", std::string("a\0b", 3), kOnly + "2 is not one)"},
+      {"a trailing newline", "plan\n", kOnly + "5 is not one)"},
+  };
+  for (const ScenarioRow& row : rows) {
+    SCOPED_TRACE(row.comment);
+    if (row.refused_with.empty()) {
+      EXPECT_NO_THROW(require_scenario_name(row.name, "--scenario"));
+      continue;
+    }
+    try {
+      require_scenario_name(row.name, "--scenario");
+      ADD_FAILURE() << "accepted a name it should refuse";
+    } catch (const InputError& error) {
+      EXPECT_EQ(error.where(), "--scenario");
+      EXPECT_EQ(error.rule(), row.refused_with);
+    }
+  }
+}
+
 }  // namespace
 }  // namespace tenure

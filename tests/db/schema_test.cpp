@@ -1,8 +1,9 @@
 // The results schema generated from results/tables.h (db/schema.cpp, db/table_sql.h): a fresh
 // database gets SPEC 7's tables and views with the columns written out below by hand from SPEC 7
 // and from the schema tenure 0.1.0 created; a database that 0.1.0 created
-// (fixtures/schemas/results_schema_v1.sql) is upgraded in place to the same columns; migrating
-// again changes nothing; and a stored row survives the generated INSERT and SELECT unchanged.
+// (fixtures/schemas/results_schema_v1.sql) is upgraded in place to the same columns, its runs
+// then baseline runs (tenure_run.scenario NULL) ordered by as_of; migrating again changes
+// nothing; and a stored row survives the generated INSERT and SELECT unchanged.
 #include "db/schema.h"
 
 #include <gtest/gtest.h>
@@ -114,8 +115,24 @@ void expect_starts_with(const std::vector<std::string>& all, const std::vector<s
 const char* const kTables[] = {"tenure_run",        "tenure_class_result", "tenure_asset_result",
                                "tenure_euac_curve", "tenure_cash_flow",    "tenure_rejected",
                                "tenure_policy"};
-const char* const kViews[] = {"tenure_latest", "tenure_due", "tenure_newly_due",
-                              "tenure_class_latest"};
+const char* const kViews[] = {"tenure_latest",       "tenure_due",       "tenure_newly_due",
+                              "tenure_class_latest", "tenure_run_order", "tenure_latest_run",
+                              "tenure_scenario_diff"};
+
+// The columns of tenure_scenario_diff, in order, as db/schema.h documents them (from the brief
+// of issue 12 item 6: run ids, the asset, both verdicts, both k*, both delay costs, the flag).
+const std::vector<std::string> kScenarioDiff = {"scenario",
+                                                "baseline_run_id",
+                                                "scenario_run_id",
+                                                "asset_id",
+                                                "asset_class",
+                                                "baseline_verdict",
+                                                "scenario_verdict",
+                                                "baseline_replace_after_years",
+                                                "scenario_replace_after_years",
+                                                "baseline_delay_cost",
+                                                "scenario_delay_cost",
+                                                "verdict_differs"};
 
 TEST(Schema, FreshDatabaseHasSpec7TablesAndViews) {
   TempDatabase file;
@@ -125,17 +142,22 @@ TEST(Schema, FreshDatabaseHasSpec7TablesAndViews) {
   EXPECT_EQ(columns_of(db, "tenure_rejected"),
             (std::vector<std::string>{"run_id INTEGER 1 0", "source TEXT 1 0", "row_ref TEXT 1 0",
                                       "reason TEXT 1 0"}));
-  EXPECT_EQ(
-      names(columns_of(db, "tenure_run")),
-      (std::vector<std::string>{
-          "run_id", "as_of", "started_at", "finished_at", "policy_json", "policy_sha256",
-          "rows_read", "rows_rejected", "status", "basis", "money", "assets_reviewed",
-          "assets_retired", "assets_not_yet_in_service", "rows_after_as_of", "tenure_version"}));
+  EXPECT_EQ(names(columns_of(db, "tenure_run")),
+            (std::vector<std::string>{
+                "run_id", "as_of", "started_at", "finished_at", "policy_json", "policy_sha256",
+                "rows_read", "rows_rejected", "status", "basis", "money", "assets_reviewed",
+                "assets_retired", "assets_not_yet_in_service", "rows_after_as_of", "tenure_version",
+                // From schema version 2: NULL for a baseline run, else the what-if run's name.
+                "scenario"}));
+  EXPECT_EQ(columns_of(db, "tenure_run").back(), "scenario TEXT 0 0");
   for (const char* view : {"tenure_latest", "tenure_due", "tenure_newly_due"}) {
     SCOPED_TRACE(view);
     expect_starts_with(names(columns_of(db, view)), kLatestSpec);
   }
   expect_starts_with(names(columns_of(db, "tenure_class_latest")), kClassLatestSpec);
+  EXPECT_EQ(names(columns_of(db, "tenure_scenario_diff")), kScenarioDiff);
+  EXPECT_EQ(names(columns_of(db, "tenure_latest_run")),
+            (std::vector<std::string>{"run_id", "as_of", "previous_run_id"}));
   EXPECT_EQ(scalar(db, "SELECT max(version) FROM tenure_schema_version"), current_schema_version());
 }
 
@@ -149,6 +171,16 @@ TEST(Schema, DatabaseOfVersionOneIsUpgradedInPlace) {
       "NULL DEFAULT (strftime('%Y-%m-%dT%H:%M:%SZ','now'))); "
       "INSERT INTO tenure_schema_version(version) VALUES (1);");
   old.exec(fixture_schema_v1());
+  // Two runs 0.1.0 stored, the second back-dated (an earlier as_of, a higher run_id).
+  for (const char* run : {"(1, '2026-06-30')", "(2, '2025-06-30')"}) {
+    old.exec(std::string("INSERT INTO tenure_run(run_id, as_of, started_at, policy_json, "
+                         "policy_sha256, rows_read, rows_rejected, status, basis, money, "
+                         "assets_reviewed, assets_retired, assets_not_yet_in_service, "
+                         "rows_after_as_of, tenure_version) SELECT *, '2026-07-01T02:00:00Z', "
+                         "'{}', '-', 0, 0, 'ok', 'after_tax', 'nominal', 0, 0, 0, 0, '0.1.0' "
+                         "FROM (VALUES ") +
+             run + ")");
+  }
   {
     Transaction tx(old, Transaction::Kind::immediate);
     migrate(old);
@@ -164,6 +196,12 @@ TEST(Schema, DatabaseOfVersionOneIsUpgradedInPlace) {
   }
   EXPECT_EQ(scalar(old, "SELECT max(version) FROM tenure_schema_version"),
             current_schema_version());
+  // The new column is there, and the runs stored before it are baseline runs, the latest being
+  // the one of the latest as_of (run 1), with the back-dated run 2 before it.
+  EXPECT_EQ(columns_of(old, "tenure_run").back(), "scenario TEXT 0 0");
+  EXPECT_EQ(scalar(old, "SELECT count(*) FROM tenure_run WHERE scenario IS NULL"), 2);
+  EXPECT_EQ(scalar(old, "SELECT run_id FROM tenure_latest_run"), 1);
+  EXPECT_EQ(scalar(old, "SELECT previous_run_id FROM tenure_latest_run"), 2);
 }
 
 TEST(Schema, MigratingAgainChangesNothing) {

@@ -69,3 +69,26 @@ SELECT tenure_review('{"marr": 0.10}'); -- error: tenure_review: $.income_tax_ra
 SELECT tenure_review('{"marr": 0.10, "income_tax_rate": 0, "sources": {"assets": "machine"}, "classes": {"pump-sql": {"challenger_first_cost": 20000, "max_life_years": 12, "depreciation": {"method": "none"}, "market_value": {"annual_decline": 0.2}, "cost_model": "linear"}}}', '2026-06-30'); -- error: tenure_review: $.sources.assets: relation 'machine' does not exist in the database
 SELECT tenure_review(); -- error: wrong number of arguments to function tenure_review()
 SELECT (SELECT count(*) FROM tenure_run) = 4;
+
+-- What-if runs: a third argument names the scenario. The nightly views ignore the run, even
+-- dated after the latest baseline run; tenure_scenario_diff compares it with that run. With a
+-- lead time of 3 years instead of 1 (SPEC 6, verdict rule (3)) exactly the assets kept with
+-- 2 <= k* <= 3 become `review`, and k* itself does not move.
+SELECT (SELECT tenure_review(replace(policy, '"marr": 0.10,', '"marr": 0.10, "lead_time_years": 3,'), '2026-12-31', 'lead-3') FROM settings) = 5;
+SELECT (SELECT scenario FROM tenure_run WHERE run_id = 5) = 'lead-3' AND (SELECT count(*) FROM tenure_run WHERE scenario IS NULL) = 4;
+SELECT (SELECT run_id FROM tenure_latest_run) = 4 AND (SELECT min(run_id) = 4 AND max(run_id) = 4 FROM tenure_latest) AND (SELECT max(run_id) FROM tenure_class_latest) = 4;
+SELECT (SELECT count(*) FROM tenure_scenario_diff WHERE scenario = 'lead-3' AND baseline_run_id = 4 AND scenario_run_id = 5) = 8;
+SELECT (SELECT count(*) FROM tenure_scenario_diff WHERE verdict_differs) = (SELECT count(*) FROM tenure_latest WHERE verdict = 'keep' AND replace_after_years BETWEEN 2 AND 3);
+SELECT (SELECT count(*) FROM tenure_scenario_diff WHERE verdict_differs AND scenario_verdict = 'review') > 0;
+SELECT (SELECT count(*) FROM tenure_scenario_diff WHERE scenario_replace_after_years IS NOT baseline_replace_after_years) = 0;
+-- A NULL scenario is a baseline run; a back-dated baseline run (an earlier as_of, a higher
+-- run_id) does not become latest, and is the run the latest is compared with.
+SELECT (SELECT tenure_review(policy, '2026-10-31', NULL) FROM settings) = 6;
+SELECT (SELECT run_id FROM tenure_latest_run) = 6 AND (SELECT max(run_id) FROM tenure_latest) = 6;
+SELECT (SELECT tenure_review(policy, '2026-10-15') FROM settings) = 7;
+SELECT (SELECT run_id FROM tenure_latest_run) = 6 AND (SELECT previous_run_id FROM tenure_latest_run) = 7;
+-- Bad names, refused before anything is written.
+SELECT tenure_review((SELECT policy FROM settings), '2026-06-30', 'next year'); -- error: tenure_review: 3rd argument (scenario) may hold only letters, digits, '-', '_' and '.' (character 5 is not one)
+SELECT tenure_review((SELECT policy FROM settings), '2026-06-30', ''); -- error: tenure_review: 3rd argument (scenario) must not be empty (a name of letters, digits, '-', '_' and '.')
+SELECT tenure_review((SELECT policy FROM settings), '2026-06-30', 7); -- error: tenure_review: 3rd argument (scenario) must be text
+SELECT (SELECT count(*) FROM tenure_run) = 7;
