@@ -27,6 +27,7 @@ void add_commands(CLI::App& app, const Console& console) {
   add_policy_command(app, console);
   add_explain_command(app, console);
   add_report_command(app, console);
+  add_repair_command(app, console);
 }
 
 }  // namespace tenure::cli

@@ -42,5 +42,7 @@ void add_policy_command(CLI::App& app, const Console& console);
 void add_explain_command(CLI::App& app, const Console& console);
 // tenure report --db PATH --out FILE.html [--run N]
 void add_report_command(CLI::App& app, const Console& console);
+// tenure repair --db PATH ASSET --estimate R [--run N] [--format text|json]
+void add_repair_command(CLI::App& app, const Console& console);
 
 }  // namespace tenure::cli
