@@ -28,6 +28,7 @@ void add_commands(CLI::App& app, const Console& console) {
   add_explain_command(app, console);
   add_report_command(app, console);
   add_due_command(app, console);
+  add_repair_command(app, console);
 }
 
 }  // namespace tenure::cli

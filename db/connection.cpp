@@ -56,6 +56,14 @@ Connection::~Connection() {
   if (owned_ && handle_) sqlite3_close_v2(handle_);
 }
 
+bool Connection::writing_statement_running() const {
+  for (sqlite3_stmt* s = sqlite3_next_stmt(handle_, nullptr); s;
+       s = sqlite3_next_stmt(handle_, s)) {
+    if (sqlite3_stmt_busy(s) && !sqlite3_stmt_readonly(s)) return true;
+  }
+  return false;
+}
+
 void Connection::exec(std::string_view sql) {
   char* error = nullptr;
   const int rc = sqlite3_exec(handle_, std::string(sql).c_str(), nullptr, nullptr, &error);

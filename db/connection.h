@@ -44,6 +44,9 @@ class Connection {
   // Runs one or more statements without results; throws on failure.
   void exec(std::string_view sql);
   bool in_transaction() const { return sqlite3_get_autocommit(handle_) == 0; }
+  // True while a statement that writes is running on the connection (a SQL function called from
+  // INSERT ... SELECT): SQLite refuses both a COMMIT and a new SAVEPOINT until it ends.
+  bool writing_statement_running() const;
 
   static constexpr int kBusyTimeoutMs = 60000;
 

@@ -5,6 +5,7 @@
 
 #include "core/checks.h"
 #include "core/errors.h"
+#include "db/row_checks.h"
 #include "db/table_sql.h"
 
 namespace tenure::db {
@@ -126,9 +127,23 @@ std::int64_t count_newly_due(Connection& db, std::int64_t run_id) {
   return q.integer(0);
 }
 
-std::optional<results::InputAsset> read_input_asset(Connection& db,
-                                                    const review::Sources& sources,
-                                                    std::string_view asset_id) {
+std::optional<results::RejectedRow> read_rejected_asset(Connection& db, std::int64_t run_id,
+                                                        std::string_view assets_source,
+                                                        std::string_view asset_id) {
+  // The reader's row_ref of an asset row is "row N (asset_id <shown id>)".
+  const std::string ends = fmt::format(" (asset_id {})", shown(asset_id));
+  Statement q(db, select_sql(results::rejected_table()) +
+                      " WHERE run_id = ?1 AND source = ?2 AND row_ref GLOB 'row [0-9]*' AND "
+                      "substr(row_ref, -length(?3)) = ?3 ORDER BY rowid LIMIT 1");
+  q.bind(1, run_id);
+  q.bind(2, assets_source);
+  q.bind(3, ends);
+  if (!q.step()) return std::nullopt;
+  return read_row(q, results::rejected_table());
+}
+
+std::optional<results::InputAsset> read_input_row(Connection& db, const review::Sources& sources,
+                                                  std::string_view asset_id) {
   Statement asset(db, fmt::format("SELECT in_service_on, retired_on, first_cost FROM {} WHERE "
                                   "asset_id = ?1",
                                   relation(sources.assets, "assets")));
@@ -138,16 +153,24 @@ std::optional<results::InputAsset> read_input_asset(Connection& db,
   out.in_service_on = asset.text(0);
   if (!asset.is_null(1)) out.retired_on = asset.text(1);
   out.first_cost = asset.real(2);
+  return out;
+}
+
+std::optional<results::InputAsset> read_input_asset(Connection& db,
+                                                    const review::Sources& sources,
+                                                    std::string_view asset_id) {
+  std::optional<results::InputAsset> out = read_input_row(db, sources, asset_id);
+  if (!out) return std::nullopt;
   Statement events(db, fmt::format("SELECT occurred_on, amount FROM {} WHERE asset_id = ?1",
                                    relation(sources.costs, "costs")));
   events.bind(1, asset_id);
   while (events.step()) {
     const int type = events.column_type(1);
     if (events.column_type(0) != SQLITE_TEXT || (type != SQLITE_INTEGER && type != SQLITE_FLOAT)) {
-      ++out.events_unreadable;
+      ++out->events_unreadable;
       continue;
     }
-    out.events.push_back({std::string(events.text(0)), events.real(1)});
+    out->events.push_back({std::string(events.text(0)), events.real(1)});
   }
   return out;
 }

@@ -1,6 +1,7 @@
-// Reads a stored review run back (SPEC 7) for `tenure explain` and `tenure report`: the run row,
-// its class and asset results, the class challengers' EUAC curves, its rejected rows, which
-// assets were due in the run before, and one asset's input row and cost events. Rows come back
+// Reads a stored review run back (SPEC 7) for `tenure explain`, `tenure report` and `tenure
+// repair`: the run row, its class and asset results, the class challengers' EUAC curves, its
+// rejected rows (all, or one asset's), which assets were due in the run before, and one asset's
+// input row with or without its cost events. Rows come back
 // as results/rows.h holds them, through each table's generated SELECT (db/table_sql.h). Every
 // value is bound; the results tables and the input relations are only read.
 //
@@ -69,5 +70,20 @@ std::int64_t count_newly_due(Connection& db, std::int64_t run_id);
 std::optional<results::InputAsset> read_input_asset(Connection& db,
                                                     const review::Sources& sources,
                                                     std::string_view asset_id);
+// The same row without its events (events empty, events_unreadable 0): sources.costs is not
+// read. Throws InputError naming "$.sources.assets" as above.
+std::optional<results::InputAsset> read_input_row(Connection& db, const review::Sources& sources,
+                                                  std::string_view asset_id);
+
+// The first row of run `run_id` in tenure_rejected that rejected the row of `asset_id` in the
+// asset relation `assets_source` (its row_ref ends in "(asset_id '<id>')", the id shown as the
+// reader shows it, db/row_checks.h); nullopt when there is none.
+//
+//   sqlite> SELECT reason FROM tenure_rejected WHERE run_id = 1 AND source = 'asset'
+//      ...>   AND row_ref = 'row 322 (asset_id ''VAN-00322'')';
+//   in_service_on '2021/11/30' is not a valid date (YYYY-MM-DD)
+std::optional<results::RejectedRow> read_rejected_asset(Connection& db, std::int64_t run_id,
+                                                        std::string_view assets_source,
+                                                        std::string_view asset_id);
 
 }  // namespace tenure::db

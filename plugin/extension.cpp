@@ -18,6 +18,7 @@
 //   tenure_book_value, tenure_macrs_rate, tenure_case     pure calculators
 //   tenure_depreciation                                   table-valued (eponymous virtual table)
 //   tenure_review                                         the nightly review, direct SQL only
+//   tenure_repair_check                                   repair or replace, direct SQL only
 //
 // How it works: one table of {name, argument count, flags, function} walked in a loop that stops
 // at the first registration that fails and returns its code; then the virtual table module. The
@@ -48,6 +49,9 @@ constexpr int kPure = SQLITE_UTF8 | SQLITE_DETERMINISTIC | SQLITE_INNOCUOUS;
 // Reads the fleet relations and writes the tenure_* tables: only from SQL the application runs
 // itself, never from a view or trigger that a database file could bring in.
 constexpr int kReadsAndWritesTables = SQLITE_UTF8 | SQLITE_DIRECTONLY;
+// Reads the fleet relations and the tenure_* tables: the same, for the same reason (a view could
+// otherwise make whoever reads it run it).
+constexpr int kReadsTables = SQLITE_UTF8 | SQLITE_DIRECTONLY;
 
 constexpr FunctionEntry kFunctions[] = {
     {"tenure_version", 0, kPure, version_function},
@@ -62,6 +66,7 @@ constexpr FunctionEntry kFunctions[] = {
     {"tenure_review", 1, kReadsAndWritesTables, review_function},
     {"tenure_review", 2, kReadsAndWritesTables, review_function},
     {"tenure_review", 3, kReadsAndWritesTables, review_function},
+    {"tenure_repair_check", 2, kReadsTables, repair_check_function},
 };
 
 int register_all(sqlite3* db) {

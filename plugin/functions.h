@@ -10,6 +10,7 @@
 //                             switch_to_straight_line, dispose_in_year])  (table-valued)
 //   case_function.cpp         tenure_case(case_json)
 //   review_function.cpp       tenure_review(policy_json[, as_of[, scenario]])
+//   repair_check_function.cpp tenure_repair_check(asset_id, estimate)
 #pragma once
 
 #include <sqlite3.h>
@@ -25,6 +26,7 @@ void book_value_function(sqlite3_context* context, int argc, sqlite3_value** arg
 void macrs_rate_function(sqlite3_context* context, int argc, sqlite3_value** argv);
 void case_function(sqlite3_context* context, int argc, sqlite3_value** argv);
 void review_function(sqlite3_context* context, int argc, sqlite3_value** argv);
+void repair_check_function(sqlite3_context* context, int argc, sqlite3_value** argv);
 
 // The eponymous-only virtual table module behind tenure_depreciation.
 const sqlite3_module& depreciation_module();

@@ -7,19 +7,6 @@
 #include "fleet/date.h"
 
 namespace tenure::plugin {
-namespace {
-
-// A statement that writes holds the connection's write state open until it ends: SQLite refuses
-// both a COMMIT and a new SAVEPOINT while it runs, and a failure there could abort it.
-void refuse_inside_writing_statement(sqlite3* db) {
-  for (sqlite3_stmt* s = sqlite3_next_stmt(db, nullptr); s; s = sqlite3_next_stmt(db, s)) {
-    if (sqlite3_stmt_busy(s) && !sqlite3_stmt_readonly(s)) {
-      throw InputError("", "cannot run inside a statement that writes; call it from a SELECT");
-    }
-  }
-}
-
-}  // namespace
 
 std::int64_t review_on(sqlite3* db, const std::optional<std::string>& policy_json,
                        const std::optional<std::string>& as_of,
@@ -31,8 +18,12 @@ std::int64_t review_on(sqlite3* db, const std::optional<std::string>& policy_jso
     options.as_of = parse_iso_date(*as_of);
     if (!options.as_of) throw InputError("as_of", "must be a date 'YYYY-MM-DD'");
   }
-  refuse_inside_writing_statement(db);
   db::Connection connection = db::Connection::borrow(db);
+  // A statement that writes holds the connection's write state open until it ends: SQLite
+  // refuses both a COMMIT and a new SAVEPOINT while it runs, and a failure there could abort it.
+  if (connection.writing_statement_running()) {
+    throw InputError("", "cannot run inside a statement that writes; call it from a SELECT");
+  }
   return app::run_review(connection, options).run_id;
 }
 
