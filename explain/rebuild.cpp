@@ -52,7 +52,7 @@ review::ClassModel rebuild_class_model(const results::ClassRow& stored,
                                       static_cast<std::size_t>(stored.valuations_used)};
   return review::make_class_model(stored.asset_class, class_policy->second,
                                   static_cast<std::size_t>(stored.assets), std::move(cost_curve),
-                                  value_curve, policy.rates);
+                                  value_curve, policy.rates, policy.esl_band);
 }
 
 review::DefenderInputs rebuild_defender_inputs(const results::AssetRow& stored,
