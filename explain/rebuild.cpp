@@ -115,4 +115,19 @@ std::vector<std::string> differences(const results::AssetRow& stored,
   return out;
 }
 
+std::vector<std::string> class_differences(const results::ClassRow& stored,
+                                           const review::ClassModel& again) {
+  std::vector<std::string> out;
+  const review::EslBand* band = again.band ? &*again.band : nullptr;
+  if (stored.esl_band_low) {
+    compare(out, "esl_band_low", stored.esl_band_low,
+            band ? std::optional(band->low) : std::nullopt);
+  }
+  if (stored.esl_band_high) {
+    compare(out, "esl_band_high", stored.esl_band_high,
+            band ? std::optional(band->high) : std::nullopt);
+  }
+  return out;
+}
+
 }  // namespace tenure::explain
