@@ -44,6 +44,7 @@ json rates(const Explanation& e) {
           {"cost_escalation", p.cost_escalation},
           {"lead_time_years", p.lead_time_years},
           {"review_margin", p.review_margin},
+          {"esl_band", p.esl_band},
           {"money", p.real_money() ? "real" : "nominal"},
           {"basis", replacement::to_string(e.review.basis)},
           {"basis_rate", e.basis_rate()},
@@ -66,8 +67,19 @@ json class_json(const Explanation& e) {
                      {"euac_before_tax", optional_value(c.euac_before_tax)},
                      {"esl_years_after_tax", optional_value(c.esl_years_after_tax)},
                      {"euac_after_tax", optional_value(c.euac_after_tax)}};
+  // The band recomputed from the rebuilt challenger; the percentiles only as stored (their
+  // refits need every asset's cost years).
+  json band = nullptr;
+  if (const auto& b = e.model.band) band = {{"low", b->low}, {"high", b->high}};
   return {{"asset_class", c.asset_class},
           {"assets", c.assets},
+          {"esl_band_low", optional_value(c.esl_band_low)},
+          {"esl_band_high", optional_value(c.esl_band_high)},
+          {"esl_p10", optional_value(c.esl_p10)},
+          {"esl_p90", optional_value(c.esl_p90)},
+          {"esl_band", e.policy->esl_band},
+          {"esl_band_recomputed", std::move(band)},
+          {"bootstrap_refits", review::kBootstrapRefits},
           {"cost_curve", std::move(cost)},
           {"value_curve",
            {{"model", fleet::name(v.model)},

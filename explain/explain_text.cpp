@@ -7,6 +7,7 @@
 #include <fmt/format.h>
 
 #include "depreciation/schedule.h"
+#include "explain/esl_words.h"
 #include "explain/text_sections.h"
 #include "formats/caution.h"
 #include "formats/depreciation_json.h"
@@ -55,6 +56,33 @@ bool close(double a, double b) {
   return std::abs(a - b) <= 1e-9 * std::max(std::abs(a), std::abs(b));
 }
 
+// The band recomputed here from the rebuilt challenger, against the run's.
+std::string band_words(const Explanation& e) {
+  const results::ClassRow& c = e.stored_class;
+  const review::EslBand& band = *e.model.band;
+  std::string out = fmt::format(
+      "{}: the lives whose {} EUAC is within esl_band {} of the least; recomputed here from the "
+      "challenger's EUAC curve (section 8b)",
+      life_span_words(band.low, band.high), basis_words(e.review.basis),
+      percent(e.policy->esl_band));
+  if (!c.esl_band_low || !c.esl_band_high) return out + "; not stored by this run";
+  if (*c.esl_band_low == band.low && *c.esl_band_high == band.high) {
+    return out + ", as the run stored it";
+  }
+  return out + "; the run stored " + life_span_words(c.esl_band_low, c.esl_band_high);
+}
+
+// The stored bootstrap percentiles: their refits need every asset's cost years.
+std::string spread_words(const Explanation& e) {
+  const results::ClassRow& c = e.stored_class;
+  if (!c.esl_p10 || !c.esl_p90) return "not stored by this run";
+  return fmt::format(
+      "{}: 10th to 90th percentile of the {} economic life over {} refits of the cost curve on "
+      "the class's assets resampled with replacement; as the run stored it (the refits need "
+      "every asset's cost years, which explain does not read)",
+      life_span_words(c.esl_p10, c.esl_p90), basis_words(e.review.basis), review::kBootstrapRefits);
+}
+
 }  // namespace
 
 std::string inputs(const Explanation& e) {
@@ -99,6 +127,8 @@ std::string rates_and_money(const Explanation& e) {
              "a replacement this near is to be budgeted or ordered now: review"});
   t.add_row({"review margin", percent(p.review_margin),
              "a break-even price this near the price is a close call"});
+  t.add_row({"economic life band", percent(p.esl_band),
+             "lives whose EUAC is within this of the least are near-best (esl_band)"});
   t.add_row({"money", p.real_money() ? "real" : "nominal",
              p.real_money() ? "costs restated to " + e.run.as_of +
                                   " money, so the MARR is a real rate (no inflation in it)"
@@ -148,10 +178,16 @@ std::string class_curves(const Explanation& e) {
                                                         years(ch->after_tax->curve.best_years),
                                                         money(ch->after_tax->curve.best_euac))});
     }
+    t.add_row({"near-best lives", band_words(e)});
+    t.add_row({"bootstrap spread", spread_words(e)});
   }
   if (!e.model.note.empty()) t.add_row({"note", e.model.note});
-  return section(fmt::format("3. Class curves: {} ({} assets)", c.asset_class, c.assets),
-                 t.render());
+  std::string body = t.render();
+  if (const std::string firmness = esl_sentence(c, e.review.basis, e.policy->esl_band);
+      !firmness.empty()) {
+    body += "  in short (as stored): " + firmness + "\n";
+  }
+  return section(fmt::format("3. Class curves: {} ({} assets)", c.asset_class, c.assets), body);
 }
 
 std::string own_costs(const Explanation& e) {

@@ -39,6 +39,7 @@ Explanation explain_asset(results::RunRow run, std::shared_ptr<const review::Pol
     own = own_costs(*input, *as_of, policy->cost_escalation, *model.cost_curve);
   }
   std::vector<std::string> diffs = differences(stored, again);
+  for (std::string& d : class_differences(stored_class, model)) diffs.push_back(std::move(d));
   return Explanation{std::move(run),    std::move(policy), std::move(stored_class),
                      std::move(stored), std::move(input),  std::move(model),
                      std::move(again),  std::move(own),    std::move(diffs)};

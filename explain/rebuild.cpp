@@ -52,7 +52,7 @@ review::ClassModel rebuild_class_model(const results::ClassRow& stored,
                                       static_cast<std::size_t>(stored.valuations_used)};
   return review::make_class_model(stored.asset_class, class_policy->second,
                                   static_cast<std::size_t>(stored.assets), std::move(cost_curve),
-                                  value_curve, policy.rates);
+                                  value_curve, policy.rates, policy.esl_band);
 }
 
 review::DefenderInputs rebuild_defender_inputs(const results::AssetRow& stored,
@@ -112,6 +112,21 @@ std::vector<std::string> differences(const results::AssetRow& stored,
   compare(out, "break_even_cost_factor", stored.break_even_cost_factor,
           s ? s->break_even_cost_factor : std::nullopt);
   compare(out, "close_call", stored.close_call, s ? std::optional(s->close_call) : std::nullopt);
+  return out;
+}
+
+std::vector<std::string> class_differences(const results::ClassRow& stored,
+                                           const review::ClassModel& again) {
+  std::vector<std::string> out;
+  const review::EslBand* band = again.band ? &*again.band : nullptr;
+  if (stored.esl_band_low) {
+    compare(out, "esl_band_low", stored.esl_band_low,
+            band ? std::optional(band->low) : std::nullopt);
+  }
+  if (stored.esl_band_high) {
+    compare(out, "esl_band_high", stored.esl_band_high,
+            band ? std::optional(band->high) : std::nullopt);
+  }
   return out;
 }
 

@@ -43,4 +43,10 @@ review::AssetReview recompute(const results::AssetRow& stored, const review::Cla
 std::vector<std::string> differences(const results::AssetRow& stored,
                                      const review::AssetReview& again);
 
+// The same for the class figures the rebuilt model recomputes: esl_band_low and esl_band_high,
+// compared where the run stored them (a run made before they were stored has none). The
+// bootstrap percentiles are not recomputed: their refits need every asset's cost years.
+std::vector<std::string> class_differences(const results::ClassRow& stored,
+                                           const review::ClassModel& again);
+
 }  // namespace tenure::explain

@@ -1,10 +1,12 @@
 // Per class: the challenger's EUAC before and after tax against years kept with the economic
-// life marked, and the ages of the assets in service against that life (see page_model.h).
+// life marked and the band of near-best lives shaded, how firm the life is in words, and the
+// ages of the assets in service against that life (see page_model.h).
 #include <algorithm>
 #include <map>
 
 #include <fmt/format.h>
 
+#include "explain/esl_words.h"
 #include "formats/text_table.h"
 #include "report/html.h"
 #include "report/page_model.h"
@@ -53,6 +55,14 @@ std::string euac_chart(const PageModel& m, const results::ClassRow& c) {
                                         m.after_tax() ? "after tax" : "before tax",
                                         formats::years(*esl)),
                             colour::kReddishPurple, Stroke::dotted});
+  }
+  // The band of near-best lives, half a year either side so that a band of one life shows.
+  if (c.esl_band_low && c.esl_band_high) {
+    chart.shades.push_back(
+        {*c.esl_band_low - 0.5, *c.esl_band_high + 0.5,
+         fmt::format("lives within {} of the least EUAC: {}", formats::percent(m.policy->esl_band),
+                     explain::life_span_words(c.esl_band_low, c.esl_band_high)),
+         colour::kBluishGreen});
   }
   chart.x_range = std::make_pair(0.0, static_cast<double>(c.max_life_years));
   return render_chart(chart);
@@ -111,13 +121,26 @@ std::string class_sections(const PageModel& m) {
         formats::money(c.challenger_first_cost), esl ? formats::years(*esl) : "-",
         money_cell(m.least_euac(c)), m.after_tax() ? "after tax" : "before tax",
         escape(fleet::name(*c.cost_model)), grouped(static_cast<double>(c.asset_years), 0));
+    if (c.esl_band_low || c.esl_p10) {
+      out += fmt::format(
+          "<p>How firm that life is: {}. A narrow band means other lives cost clearly more; "
+          "percentiles close together mean the class's cost history fixes the life well.</p>",
+          escape(explain::esl_sentence(c, m.data->run.basis, m.policy->esl_band)));
+    }
     if (c.note) out += "<p class=\"warn\">" + escape(*c.note) + "</p>";
+    const std::string band_caption =
+        c.esl_band_low
+            ? fmt::format(
+                  " The green shade spans the lives whose {} EUAC is within "
+                  "{} (esl_band) of the least.",
+                  m.after_tax() ? "after-tax" : "before-tax", formats::percent(m.policy->esl_band))
+            : "";
     out += fmt::format(
         "<div class=\"charts\"><figure>{}<figcaption>Before tax at the MARR (solid), after tax "
-        "at the after-tax MARR (dashed); diamonds mark each least EUAC.</figcaption></figure>"
+        "at the after-tax MARR (dashed); diamonds mark each least EUAC.{}</figcaption></figure>"
         "<figure>{}<figcaption>Each bar counts the units of one age; orange bars are at or past "
         "the economic life.</figcaption></figure></div></section>",
-        euac_chart(m, c), age_chart(m, c));
+        euac_chart(m, c), band_caption, age_chart(m, c));
   }
   return out + "</section>";
 }

@@ -16,6 +16,7 @@ namespace {
 
 constexpr double kLeft = 72, kRight = 24, kTop = 44, kAxisBelow = 46;
 constexpr double kLegendRow = 20, kCharWidth = 6.6;  // 12px text, average width
+constexpr double kShadeOpacity = 0.22;  // a shade's tint: the grid and the lines show through
 
 const char* dash(Stroke stroke) {
   switch (stroke) {
@@ -62,6 +63,7 @@ struct LegendEntry {
   Marker marker;
   bool box;   // a filled swatch (bars) rather than a line sample
   bool line;  // a line sample (a single point shows its marker only)
+  double opacity = 1;  // a swatch's: a shade's is translucent
 };
 
 std::vector<LegendEntry> legend_entries(const Chart& c) {
@@ -81,6 +83,9 @@ std::vector<LegendEntry> legend_entries(const Chart& c) {
   }
   for (const ReferenceLine& l : c.hlines) {
     out.push_back({l.label, l.colour, l.stroke, Marker::none, false, true});
+  }
+  for (const Shade& s : c.shades) {
+    out.push_back({s.label, s.colour, Stroke::solid, Marker::none, true, false, kShadeOpacity});
   }
   return out;
 }
@@ -137,6 +142,7 @@ std::string render_chart(const Chart& c) {
   for (const Bar& b : c.bars) { see_x(b.x0); see_x(b.x1); see_y(b.y); }
   for (const ReferenceLine& l : c.vlines) see_x(l.at);
   for (const ReferenceLine& l : c.hlines) see_y(l.at);
+  for (const Shade& s : c.shades) { see_x(s.x0); see_x(s.x1); }
   if (c.x_range) { x_min = c.x_range->first; x_max = c.x_range->second; }
   if (!std::isfinite(x_min)) { x_min = 0; x_max = 1; }
   const std::vector<double> x_ticks = nice_ticks(x_min, x_max, 8, c.integer_x);
@@ -197,6 +203,16 @@ std::string render_chart(const Chart& c) {
                      "fill=\"{}\">{}</text>",
                      (plot_top + plot_bottom) / 2, colour::kInk, escape(c.y_label));
 
+  // Shades first, under everything drawn on the plot.
+  for (const Shade& s : c.shades) {
+    const double left = px(std::clamp(std::min(s.x0, s.x1), x_min, x_max));
+    const double right = px(std::clamp(std::max(s.x0, s.x1), x_min, x_max));
+    svg += fmt::format(
+        "<rect class=\"shade\" x=\"{:.1f}\" y=\"{:.1f}\" width=\"{:.1f}\" "
+        "height=\"{:.1f}\" fill=\"{}\" fill-opacity=\"{}\"/>",
+        left, plot_top, right - left, plot_bottom - plot_top, s.colour, kShadeOpacity);
+  }
+
   // Horizontal lines are named in the legend only: a label on the line would cover the series
   // that cross it.
   for (const ReferenceLine& l : c.hlines) {
@@ -242,8 +258,11 @@ std::string render_chart(const Chart& c) {
     double x = plot_left;
     for (const LegendEntry& e : row) {
       if (e.box) {
-        svg += fmt::format("<rect x=\"{:.1f}\" y=\"{:.1f}\" width=\"22\" height=\"10\" fill=\"{}\"/>",
-                           x, legend_y - 9, e.colour);
+        svg += fmt::format(
+            "<rect x=\"{:.1f}\" y=\"{:.1f}\" width=\"22\" height=\"10\" "
+            "fill=\"{}\"{}/>",
+            x, legend_y - 9, e.colour,
+            e.opacity < 1 ? fmt::format(" fill-opacity=\"{}\"", e.opacity) : "");
       } else {
         if (e.line) {
           svg += fmt::format("<line x1=\"{:.1f}\" x2=\"{:.1f}\" y1=\"{:.1f}\" y2=\"{:.1f}\" "

@@ -1,12 +1,13 @@
-// Small static SVG charts drawn by tenure for the HTML report: lines with markers, bars, and
-// vertical and horizontal reference lines, on axes with ticks, labels and units, with a title and
-// a legend. Every text is escaped. Colour is never the only cue: each series also has a stroke
-// pattern and a marker, and each has a legend entry.
+// Small static SVG charts drawn by tenure for the HTML report: lines with markers, bars,
+// vertical and horizontal reference lines and shaded x ranges, on axes with ticks, labels and
+// units, with a title and a legend. Every text is escaped. Colour is never the only cue: each
+// series also has a stroke pattern and a marker, and each has a legend entry.
 //
 //   Chart c{"EUAC by years kept", "years kept", "EUAC (money units per year)"};
 //   c.series.push_back({"before tax", {{1, 9800}, {2, 8100}}, colour::kBlue, Stroke::solid,
 //                       Marker::circle});
 //   c.vlines.push_back({13, "economic life 13 years", colour::kReddishPurple, Stroke::dotted});
+//   c.shades.push_back({10.5, 15.5, "lives within 2% of the least", colour::kBluishGreen});
 //   std::string svg = render_chart(c);   // "<svg ...>...</svg>"
 #pragma once
 
@@ -35,6 +36,14 @@ struct Bar {
   std::string legend;
 };
 
+// A translucent rectangle over the plot's whole height from x0 to x1 (cut to the x range),
+// drawn under the bars and lines, with a legend swatch of the same tint.
+struct Shade {
+  double x0, x1;
+  std::string label;
+  const char* colour;
+};
+
 struct ReferenceLine {
   double at;           // x for a vertical line, y for a horizontal one
   std::string label;   // in the legend, and beside a vertical line
@@ -55,6 +64,7 @@ struct Chart {
   std::vector<Bar> bars;
   std::vector<ReferenceLine> vlines;
   std::vector<ReferenceLine> hlines;
+  std::vector<Shade> shades;
   double width = 560;
   double height = 320;
   // Axis ranges: by default from the data (y always includes 0), widened to whole ticks.

@@ -40,6 +40,14 @@ ClassRow class_row(const review::ClassModel& m) {
   row.value_decline = m.value_curve.value_decline;
   row.valuations_used = static_cast<std::int64_t>(m.value_curve.valuations_used);
   if (!m.note.empty()) row.note = m.note;
+  if (m.band) {
+    row.esl_band_low = m.band->low;
+    row.esl_band_high = m.band->high;
+  }
+  if (m.spread) {
+    row.esl_p10 = m.spread->p10;
+    row.esl_p90 = m.spread->p90;
+  }
   return row;
 }
 

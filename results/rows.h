@@ -78,6 +78,12 @@ struct ClassRow {
   double value_decline = 0;
   std::int64_t valuations_used = 0;
   std::optional<std::string> note;  // why there is no challenger, or what was assumed
+  // How firm the economic life is (SPEC 11 "Per class", on the run's basis; empty without a
+  // challenger): the shortest and longest lives within esl_band of the least EUAC
+  // (review/esl_band.h), and the life's 10th and 90th percentiles over the bootstrap refits
+  // (review/esl_bootstrap.h).
+  std::optional<Years> esl_band_low, esl_band_high;
+  std::optional<Years> esl_p10, esl_p90;
 };
 
 // A row of tenure_asset_result. The optional figures are empty when the class could not be

@@ -56,6 +56,20 @@ constexpr Column<ClassRow> kClassColumns[] = {
     column<&ClassRow::value_decline>("value_decline", "REAL NOT NULL"),
     column<&ClassRow::valuations_used>("valuations_used", "INTEGER NOT NULL"),
     column<&ClassRow::note>("note", "TEXT", {.in_views = true}),
+    column<&ClassRow::esl_band_low>(
+        "esl_band_low", "INTEGER",
+        {.note = "shortest life within esl_band of the least EUAC", .since = 2, .in_views = true}),
+    column<&ClassRow::esl_band_high>(
+        "esl_band_high", "INTEGER",
+        {.note = "longest life within esl_band of the least EUAC", .since = 2, .in_views = true}),
+    column<&ClassRow::esl_p10>("esl_p10", "INTEGER",
+                               {.note = "10th percentile of the life over 200 bootstrap refits",
+                                .since = 2,
+                                .in_views = true}),
+    column<&ClassRow::esl_p90>("esl_p90", "INTEGER",
+                               {.note = "90th percentile of the life over 200 bootstrap refits",
+                                .since = 2,
+                                .in_views = true}),
 };
 
 constexpr Column<AssetRow> kAssetColumns[] = {

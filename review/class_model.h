@@ -1,11 +1,13 @@
 // One asset class in the nightly review (SPEC 6): its cost curve fitted on the pooled complete
 // asset-years of all its assets (retired ones too), its market-value curve, and its challenger,
 // a new unit analysed over 1..max_life_years whose economic service life is the class's best
-// economic age.
+// economic age; and how firm that life is (SPEC 11 "Per class"): the lives within esl_band of
+// the least EUAC (esl_band.h) and the life's bootstrap percentiles (esl_bootstrap.h).
 //
 //   ClassModel vans = build_class_model("van-delivery", policy.classes.at("van-delivery"),
-//                                       data, members, policy.rates);
+//                                       data, members, policy.rates, policy.esl_band);
 //   if (vans.challenger) vans.challenger->on(Basis::after_tax).curve.best_years;
+//   vans.band->low; vans.spread->p90;
 #pragma once
 
 #include <memory>
@@ -17,6 +19,8 @@
 #include "fleet/value_curve.h"
 #include "replacement/break_even.h"
 #include "replacement/case_analysis.h"
+#include "review/esl_band.h"
+#include "review/esl_bootstrap.h"
 #include "review/fleet_data.h"
 #include "review/policy.h"
 
@@ -34,6 +38,12 @@ struct ClassModel {
   // The challenger's EUAC(n) against its price on the decision's basis (replacement/break_even.h
   // rule (2)); empty without a challenger.
   std::vector<replacement::Line> price_lines;
+  // On the decision's basis, present with a challenger: the lives whose EUAC is within the
+  // policy's esl_band of the least (esl_band.h), and the economic life's 10th and 90th
+  // percentiles over the bootstrap refits (esl_bootstrap.h). Only build_class_model has the
+  // assets' cost years to draw from: a model made from stored curves has no spread.
+  std::optional<EslBand> band;
+  std::optional<EslSpread> spread;
   std::string note;  // why there is no challenger, or what was assumed; empty when nothing
 
   // Expected operating cost of age-year k for a unit at `factor` times the class level; a curve
@@ -41,16 +51,28 @@ struct ClassModel {
   Money cost_at(Years age_year, double factor = 1.0) const;
 };
 
+// The class challenger on a cost curve: a new unit at the policy's price, its operating cost of
+// year k the curve at age-year k (read as zero where the curve falls below it), its market
+// value the value curve times the price, depreciated by `depreciation`, kept
+// 1..max_life_years.
+replacement::Ownership challenger_ownership(
+    const ClassPolicy& policy, const fleet::CostCurve& cost_curve,
+    const fleet::ValueCurve& value_curve, std::shared_ptr<const depreciation::Method> depreciation);
+
 // The class model from curves already fitted (or read back from a stored run, as `tenure
-// explain` does): builds and analyses the challenger when there is a cost curve.
+// explain` does): builds and analyses the challenger when there is a cost curve, and its band of
+// lives within `band_width` (the policy's esl_band) of the least EUAC.
 ClassModel make_class_model(const std::string& asset_class, const ClassPolicy& policy,
                             std::size_t assets, std::optional<fleet::CostCurve> cost_curve,
-                            fleet::ValueCurve value_curve, const tax::Rates& rates);
+                            fleet::ValueCurve value_curve, const tax::Rates& rates,
+                            double band_width);
 
-// Fits the class's curves on its members' data, then make_class_model. `members` are the indices
-// in data.assets of the class's assets.
+// Fits the class's curves on its members' data, then make_class_model, then the bootstrap
+// spread of its economic life: each refit's challenger is challenger_ownership on the refitted
+// curve (same price, value curve, depreciation and max life), its life on the decision's basis.
+// `members` are the indices in data.assets of the class's assets.
 ClassModel build_class_model(const std::string& asset_class, const ClassPolicy& policy,
                              const FleetData& data, const std::vector<std::size_t>& members,
-                             const tax::Rates& rates);
+                             const tax::Rates& rates, double band_width);
 
 }  // namespace tenure::review

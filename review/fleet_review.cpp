@@ -6,6 +6,7 @@
 #include <exception>
 #include <map>
 #include <mutex>
+#include <optional>
 #include <thread>
 
 #include "core/errors.h"
@@ -36,6 +37,49 @@ void compact(AssetReview& review) {
   if (review.decision) review.decision->timing.present_worth = std::vector<Money>();
 }
 
+// Every class model, by class name. The classes are independent and each one's bootstrap
+// (esl_bootstrap.h) is most of the work, so they are built on up to as many threads as there
+// are cores (four at most), each taking the next class in turn; the first failure is rethrown.
+std::vector<ClassModel> build_classes(
+    const FleetData& data, const Policy& policy,
+    const std::map<std::string, std::vector<std::size_t>, std::less<>>& members) {
+  std::vector<const std::pair<const std::string, std::vector<std::size_t>>*> order;
+  for (const auto& entry : members) {
+    if (!policy.classes.contains(entry.first)) {
+      throw RuntimeFailure("asset class '" + entry.first +
+                           "' has no policy (the reader should reject it)");
+    }
+    order.push_back(&entry);
+  }
+  std::vector<std::optional<ClassModel>> built(order.size());
+  std::atomic<std::size_t> next{0};
+  std::exception_ptr failure;
+  std::mutex failure_mutex;
+  const auto build_next = [&] {
+    for (std::size_t c = next.fetch_add(1); c < order.size(); c = next.fetch_add(1)) {
+      try {
+        const auto& [name, indices] = *order[c];
+        built[c] = build_class_model(name, policy.classes.find(name)->second, data, indices,
+                                     policy.rates, policy.esl_band);
+      } catch (...) {
+        std::lock_guard lock(failure_mutex);
+        if (!failure) failure = std::current_exception();
+      }
+    }
+  };
+  const std::size_t threads =
+      std::min<std::size_t>({order.size(), 4, std::max(1u, std::thread::hardware_concurrency())});
+  std::vector<std::thread> helpers;
+  for (std::size_t t = 1; t < threads; ++t) helpers.emplace_back(build_next);
+  build_next();
+  for (auto& helper : helpers) helper.join();
+  if (failure) std::rethrow_exception(failure);
+  std::vector<ClassModel> out;
+  out.reserve(built.size());
+  for (auto& model : built) out.push_back(std::move(*model));
+  return out;
+}
+
 }  // namespace
 
 ReviewResult plan_review(const FleetData& data, const Policy& policy) {
@@ -45,13 +89,7 @@ ReviewResult plan_review(const FleetData& data, const Policy& policy) {
     members[data.assets[i].asset_class].push_back(i);
   }
   ReviewResult result;
-  for (const auto& [name, indices] : members) {
-    const auto policy_it = policy.classes.find(name);
-    if (policy_it == policy.classes.end()) {
-      throw RuntimeFailure("asset class '" + name + "' has no policy (the reader should reject it)");
-    }
-    result.classes.push_back(build_class_model(name, policy_it->second, data, indices, policy.rates));
-  }
+  result.classes = build_classes(data, policy, members);
   // Assets in service at the as-of date get a verdict; retired ones fed the curves only.
   std::vector<std::size_t> in_service;
   for (std::size_t i = 0; i < data.assets.size(); ++i) {

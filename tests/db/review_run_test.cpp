@@ -88,6 +88,28 @@ TEST_P(NoiselessFleet, ClassEconomicLifeEqualsTheCaseAnalysis) {
   }
 }
 
+// SPEC 11 "Per class" on the noiseless fleet: the band by its rule (EUAC(n) <= 1.02 x least, the
+// policy's default esl_band, restated here) on the case analysis's curve; every asset lies on
+// the class curve, so each bootstrap refit is that curve and p10 = p90 = the economic life.
+TEST_P(NoiselessFleet, ClassLifeBandAndPercentilesFollowTheCaseAnalysis) {
+  review();
+  Connection db = file.open();
+  const auto result = replacement::analyse(formats::read_case(challenger_case(GetParam())));
+  const auto& curve = result.challenger.on(result.basis).curve;
+  int low = 0, high = 0;
+  for (std::size_t n = 0; n < curve.euac.size(); ++n) {
+    if (curve.euac[n] <= 1.02 * curve.best_euac * (1 + kExact)) {
+      if (low == 0) low = static_cast<int>(n) + 1;
+      high = static_cast<int>(n) + 1;
+    }
+  }
+  ASSERT_GT(low, 0);
+  EXPECT_EQ(scalar(db, "SELECT esl_band_low FROM tenure_class_latest"), low);
+  EXPECT_EQ(scalar(db, "SELECT esl_band_high FROM tenure_class_latest"), high);
+  EXPECT_EQ(scalar(db, "SELECT esl_p10 FROM tenure_class_latest"), curve.best_years);
+  EXPECT_EQ(scalar(db, "SELECT esl_p90 FROM tenure_class_latest"), curve.best_years);
+}
+
 TEST_P(NoiselessFleet, VerdictsEqualTheDefenderCaseAnalysis) {
   review();
   Connection db = file.open();

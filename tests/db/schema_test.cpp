@@ -72,6 +72,31 @@ const std::vector<std::string> kAssetResult = {"run_id INTEGER 1 1",
                                                "break_even_cost_factor REAL 0 0",
                                                "close_call INTEGER 0 0"};
 
+const std::vector<std::string> kClassResult = {"run_id INTEGER 1 1",
+                                               "asset_class TEXT 1 2",
+                                               "assets INTEGER 1 0",
+                                               "challenger_first_cost REAL 1 0",
+                                               "max_life_years INTEGER 1 0",
+                                               "esl_years_before_tax INTEGER 0 0",
+                                               "euac_before_tax REAL 0 0",
+                                               "esl_years_after_tax INTEGER 0 0",
+                                               "euac_after_tax REAL 0 0",
+                                               "cost_model TEXT 0 0",
+                                               "cost_a REAL 0 0",
+                                               "cost_g REAL 0 0",
+                                               "cost_r2 REAL 0 0",
+                                               "asset_years INTEGER 1 0",
+                                               "value_model TEXT 1 0",
+                                               "value_start REAL 1 0",
+                                               "value_decline REAL 1 0",
+                                               "valuations_used INTEGER 1 0",
+                                               "note TEXT 0 0",
+                                               // SPEC 11 "Per class", from schema version 2:
+                                               "esl_band_low INTEGER 0 0",
+                                               "esl_band_high INTEGER 0 0",
+                                               "esl_p10 INTEGER 0 0",
+                                               "esl_p90 INTEGER 0 0"};
+
 // SPEC 7's columns of tenure_latest, in its order (views report no types or keys).
 const std::vector<std::string> kLatestSpec = {"run_id",
                                               "asset_id",
@@ -139,6 +164,7 @@ TEST(Schema, FreshDatabaseHasSpec7TablesAndViews) {
   Connection db = file.open();
   migrate(db);
   EXPECT_EQ(columns_of(db, "tenure_asset_result"), kAssetResult);
+  EXPECT_EQ(columns_of(db, "tenure_class_result"), kClassResult);
   EXPECT_EQ(columns_of(db, "tenure_rejected"),
             (std::vector<std::string>{"run_id INTEGER 1 0", "source TEXT 1 0", "row_ref TEXT 1 0",
                                       "reason TEXT 1 0"}));
@@ -154,7 +180,12 @@ TEST(Schema, FreshDatabaseHasSpec7TablesAndViews) {
     SCOPED_TRACE(view);
     expect_starts_with(names(columns_of(db, view)), kLatestSpec);
   }
-  expect_starts_with(names(columns_of(db, "tenure_class_latest")), kClassLatestSpec);
+  const std::vector<std::string> class_latest = names(columns_of(db, "tenure_class_latest"));
+  expect_starts_with(class_latest, kClassLatestSpec);
+  // SPEC 11's per-class figures are shown too, last.
+  ASSERT_GE(class_latest.size(), 4u);
+  EXPECT_EQ(std::vector<std::string>(class_latest.end() - 4, class_latest.end()),
+            (std::vector<std::string>{"esl_band_low", "esl_band_high", "esl_p10", "esl_p90"}));
   EXPECT_EQ(names(columns_of(db, "tenure_scenario_diff")), kScenarioDiff);
   EXPECT_EQ(names(columns_of(db, "tenure_latest_run")),
             (std::vector<std::string>{"run_id", "as_of", "previous_run_id"}));
@@ -252,6 +283,43 @@ TEST(TableSql, AStoredRowReadsBackUnchanged) {
   EXPECT_EQ(scalar(db,
                    "SELECT count(*) FROM tenure_asset_result WHERE verdict = 'replace' AND "
                    "basis = 'before_tax' AND challenger_euac IS NULL"),
+            1);
+}
+
+TEST(TableSql, AClassRowsLifeFiguresReadBack) {
+  TempDatabase file;
+  Connection db = file.open();
+  migrate(db);
+  results::ClassRow row;  // invented
+  row.asset_class = "pump-duty";
+  row.assets = 40;
+  row.challenger_first_cost = 18500;
+  row.max_life_years = 15;
+  row.esl_years_after_tax = 9;
+  row.esl_band_low = 7;
+  row.esl_band_high = 12;
+  row.esl_p10 = 8;
+  row.esl_p90 = 11;
+  results::ClassRow without = row;  // a class without a challenger has none of them
+  without.asset_class = "van-delivery";
+  without.esl_years_after_tax = std::nullopt;
+  without.esl_band_low = without.esl_band_high = without.esl_p10 = without.esl_p90 = std::nullopt;
+  TableWriter<results::ClassRow> writer(db, results::class_table());
+  writer.insert(row, 3);
+  writer.insert(without, 3);
+  Statement q(db, select_sql(results::class_table()) + " WHERE run_id = 3 ORDER BY asset_class");
+  ASSERT_TRUE(q.step());
+  const results::ClassRow back = read_row(q, results::class_table());
+  EXPECT_EQ(back.esl_band_low, 7);
+  EXPECT_EQ(back.esl_band_high, 12);
+  EXPECT_EQ(back.esl_p10, 8);
+  EXPECT_EQ(back.esl_p90, 11);
+  ASSERT_TRUE(q.step());
+  const results::ClassRow none = read_row(q, results::class_table());
+  EXPECT_FALSE(none.esl_band_low || none.esl_band_high || none.esl_p10 || none.esl_p90);
+  EXPECT_EQ(scalar(db,
+                   "SELECT count(*) FROM tenure_class_result WHERE esl_band_low = 7 AND "
+                   "esl_band_high = 12 AND esl_p10 = 8 AND esl_p90 = 11"),
             1);
 }
 

@@ -83,6 +83,14 @@ TEST(ExplainAsset, ClassWithoutCostCurveIsUnderReviewWithItsNote) {
   f.stored_class.cost_model.reset();
   f.stored_class.cost_a.reset();
   f.stored_class.cost_g.reset();
+  // Without a cost curve the run stores no challenger figures for the class either.
+  for (auto* life : {&f.stored_class.esl_years_before_tax, &f.stored_class.esl_years_after_tax,
+                     &f.stored_class.esl_band_low, &f.stored_class.esl_band_high,
+                     &f.stored_class.esl_p10, &f.stored_class.esl_p90}) {
+    life->reset();
+  }
+  f.stored_class.euac_before_tax.reset();
+  f.stored_class.euac_after_tax.reset();
   for (auto* figure : {&f.stored.defender_euac, &f.stored.challenger_euac,
                        &f.stored.defender_euac_before_tax, &f.stored.defender_euac_after_tax,
                        &f.stored.marginal_cost_next_year}) {

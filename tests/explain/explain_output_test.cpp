@@ -5,8 +5,10 @@
 
 #include <cmath>
 
+#include <fmt/format.h>
 #include <nlohmann/json.hpp>
 
+#include "explain/esl_words.h"
 #include "explain/explain_json.h"
 #include "explain/explain_text.h"
 #include "formats/case_json.h"
@@ -48,6 +50,61 @@ TEST(ExplainText, HasEverySectionTheVerdictAndTheCaution) {
             std::string(formats::kCaution) + "\n");
 }
 
+// SPEC 11 "Per class" in section 3: the band recomputed from the rebuilt challenger and found
+// equal to the stored one (the fixture's, by the rule on the case analysis), the stored
+// percentiles, and the sentence that sums them up.
+TEST(ExplainText, ClassSectionShowsTheBandAndThePercentiles) {
+  const Explanation e = reproduced_explanation(5);
+  const std::string text = explanation_to_text(e);
+  const results::ClassRow& c = e.stored_class;
+  ASSERT_TRUE(c.esl_band_low && c.esl_band_high && c.esl_p10 && c.esl_p90);
+  const Years esl = *e.stored.class_esl_years;
+  const std::string band = life_span_words(c.esl_band_low, c.esl_band_high);
+  const std::string spread = fmt::format("{} to {} years", esl - 1, esl + 1);
+  for (const std::string& expected :
+       {std::string("economic life band       2.00%"),
+        "near-best lives            " + band +
+            ": the lives whose after-tax EUAC is within esl_band 2.00% of the least; "
+            "recomputed here from the challenger's EUAC curve (section 8b), as the run stored it",
+        "bootstrap spread           " + spread +
+            ": 10th to 90th percentile of the after-tax economic life over 200 refits",
+        fmt::format("  in short (as stored): economic life {} years; lives within 2.00% of the "
+                    "least EUAC: {}; bootstrap 10th-90th percentile: {} (200 refits of the cost "
+                    "curve on resampled assets)\n",
+                    esl, band, spread)}) {
+    EXPECT_NE(text.find(expected), std::string::npos) << expected << "\n" << text;
+  }
+}
+
+TEST(ExplainText, ARunWithoutTheClassLifeFiguresSaysSo) {
+  PumpFixture f(5);
+  f.stored_class.esl_band_low = f.stored_class.esl_band_high = std::nullopt;
+  f.stored_class.esl_p10 = f.stored_class.esl_p90 = std::nullopt;
+  f.stored.reason =
+      explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt).review.finding.reason;
+  const Explanation e = explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt);
+  EXPECT_TRUE(e.reproduced());  // nothing stored, nothing to compare
+  const std::string text = explanation_to_text(e);
+  EXPECT_NE(text.find("of the least; recomputed here from the challenger's EUAC curve (section "
+                      "8b); not stored by this run"),
+            std::string::npos);
+  EXPECT_NE(text.find("bootstrap spread           not stored by this run"), std::string::npos);
+}
+
+TEST(ExplainText, AStoredBandTheRebuildDoesNotReproduceFailsTheCheck) {
+  PumpFixture f(5);
+  f.stored.reason =
+      explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt).review.finding.reason;
+  const Years high = *f.stored_class.esl_band_high;
+  f.stored_class.esl_band_high = high + 1;
+  const Explanation e = explain_asset(f.run, f.policy, f.stored_class, f.stored, std::nullopt);
+  EXPECT_EQ(e.differences, (std::vector<std::string>{fmt::format(
+                               "esl_band_high: stored {}, recomputed {}", high + 1, high)}));
+  EXPECT_NE(explanation_to_text(e).find(fmt::format(
+                "; the run stored {}", life_span_words(f.stored_class.esl_band_low, high + 1))),
+            std::string::npos);
+}
+
 TEST(ExplainText, SaysLoudlyWhenAFigureIsNotReproduced) {
   PumpFixture f(5);
   const std::string text =
@@ -64,6 +121,17 @@ TEST(ExplainJson, HoldsTheTablesAndParses) {
   EXPECT_EQ(doc.at("caution"), formats::kCaution);
   EXPECT_EQ(doc.at("rates").at("money"), "nominal");
   EXPECT_EQ(doc.at("class").at("cost_curve").at("a"), 1000.0);
+  // SPEC 11's class figures as stored, and the band recomputed.
+  const nlohmann::json& c = doc.at("class");
+  EXPECT_EQ(c.at("esl_band_low"), *e.stored_class.esl_band_low);
+  EXPECT_EQ(c.at("esl_band_high"), *e.stored_class.esl_band_high);
+  EXPECT_EQ(c.at("esl_p10"), *e.stored_class.esl_p10);
+  EXPECT_EQ(c.at("esl_p90"), *e.stored_class.esl_p90);
+  EXPECT_EQ(c.at("esl_band"), 0.02);
+  EXPECT_EQ(c.at("bootstrap_refits"), 200);
+  EXPECT_EQ(c.at("esl_band_recomputed").at("low"), *e.stored_class.esl_band_low);
+  EXPECT_EQ(c.at("esl_band_recomputed").at("high"), *e.stored_class.esl_band_high);
+  EXPECT_EQ(doc.at("rates").at("esl_band"), 0.02);
   const int weighed = testing::kMaxLife - 5;
   const nlohmann::json& flows = doc.at("defender").at("cash_flows");
   ASSERT_EQ(flows.size(), static_cast<std::size_t>(weighed));

@@ -98,6 +98,25 @@ struct PumpFixture {
     const replacement::Decision& d = *r.decision;
     const int esl = r.challenger.on(r.basis).curve.best_years;
     stored.class_esl_years = esl;
+    stored_class.esl_years_before_tax = r.challenger.before_tax.curve.best_years;
+    stored_class.euac_before_tax = r.challenger.before_tax.curve.best_euac;
+    if (r.challenger.after_tax) {
+      stored_class.esl_years_after_tax = r.challenger.after_tax->curve.best_years;
+      stored_class.euac_after_tax = r.challenger.after_tax->curve.best_euac;
+    }
+    // SPEC 11 "Per class": the band by its rule restated here (EUAC(n) <= least + 0.02 |least|,
+    // the policy's default esl_band, ties within 1e-9) on the case analysis's curve; the
+    // bootstrap percentiles are invented (explain shows them as stored: it has no asset data to
+    // draw from).
+    const replacement::LifeCurve& curve = r.challenger.on(r.basis).curve;
+    for (std::size_t n = 0; n < curve.euac.size(); ++n) {
+      if (curve.euac[n] <= curve.best_euac + (0.02 + 1e-9) * std::abs(curve.best_euac)) {
+        if (!stored_class.esl_band_low) stored_class.esl_band_low = static_cast<int>(n) + 1;
+        stored_class.esl_band_high = static_cast<int>(n) + 1;
+      }
+    }
+    stored_class.esl_p10 = esl - 1;
+    stored_class.esl_p90 = esl + 1;
     stored.defender_best_years = d.defender_best_years;
     stored.defender_euac = d.defender_euac;
     stored.challenger_euac = d.challenger_euac;

@@ -61,6 +61,16 @@ json& van(json& p) { return p["classes"]["van-delivery"]; }
 
 TEST(PolicyRefusals, BaseIsValid) { EXPECT_EQ(policy_error(base_policy().dump()), "no error"); }
 
+// The edges of esl_band's range that are allowed, and its default of SPEC 11 (0.02).
+TEST(PolicyRefusals, EslBandDefaultAndAllowedEdges) {
+  EXPECT_EQ(read_policy(base_policy().dump()).esl_band, 0.02);
+  for (const double band : {0.0, 0.5, 0.999}) {
+    json policy = base_policy();
+    policy["esl_band"] = band;
+    EXPECT_EQ(read_policy(policy.dump()).esl_band, band);
+  }
+}
+
 TEST(PolicyRefusals, UnknownKeysAtEachLevel) {
   const std::vector<BadPolicy> cases = {
       {"top level", [](json& p) { p["mar"] = 0.1; }, "$.mar|" + kTopKeys},
@@ -90,6 +100,7 @@ TEST(PolicyRefusals, WrongTypes) {
        "$.cost_escalation|expected a number"},
       {"margin as boolean", [](json& p) { p["review_margin"] = true; },
        "$.review_margin|expected a number"},
+      {"esl band as text", [](json& p) { p["esl_band"] = "2%"; }, "$.esl_band|expected a number"},
       {"detail as number", [](json& p) { p["detail"] = 1; }, "$.detail|expected a string"},
       {"sources as text", [](json& p) { p["sources"] = "asset"; }, "$.sources|expected an object"},
       {"source as number", [](json& p) { p["sources"]["costs"] = 7; },
@@ -167,6 +178,8 @@ TEST(PolicyRefusals, RatesAndAmountsOutOfRange) {
       {"escalation -1", [](json& p) { p["cost_escalation"] = -1; }, "$.cost_escalation|must be in (-1, 1)"},
       {"margin 1", [](json& p) { p["review_margin"] = 1; }, "$.review_margin|must be in [0, 1)"},
       {"margin negative", [](json& p) { p["review_margin"] = -0.01; }, "$.review_margin|must be in [0, 1)"},
+      {"esl band 1", [](json& p) { p["esl_band"] = 1; }, "$.esl_band|must be in [0, 1)"},
+      {"esl band negative", [](json& p) { p["esl_band"] = -0.02; }, "$.esl_band|must be in [0, 1)"},
       {"decline 1", [](json& p) { van(p)["market_value"]["annual_decline"] = 1; },
        "$.classes.van-delivery.market_value.annual_decline|must be in [0, 1)"},
       {"decline negative", [](json& p) { van(p)["market_value"]["annual_decline"] = -0.1; },

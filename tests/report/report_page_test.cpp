@@ -4,6 +4,8 @@
 // due list in order, newly due and rejected rows counted.
 #include <gtest/gtest.h>
 
+#include <algorithm>
+
 #include <fmt/format.h>
 
 #include "explain/explanation.h"
@@ -103,6 +105,38 @@ TEST(ReportPage, DrawsTheClassChartsAndOneChartPerDueAsset) {
   EXPECT_NE(html.find(fmt::format("<div class=\"n\">{}</div><div class=\"what\">newly due", due - 1)),
             std::string::npos);
   EXPECT_NE(html.find("2 input rows could not be used"), std::string::npos);
+}
+
+// SPEC 11 "Per class" on the class EUAC chart and in the class paragraph.
+TEST(ReportPage, ShadesTheNearBestLivesAndNamesThePercentiles) {
+  ReportData data = invented_run();
+  results::ClassRow& c = data.classes[0];
+  ASSERT_TRUE(c.esl_band_low && c.esl_band_high && c.esl_p10 && c.esl_p90);
+  const std::string html = render_report(data);
+  EXPECT_EQ(count(html, "<rect class=\"shade\""), 1u);  // the EUAC chart's, not the ages'
+  // By hand from the chart's geometry: x = 0..max_life_years on 72..536, the shade from half a
+  // year before the band's shortest life to half a year after its longest (cut to the axis).
+  const double left = 72 + (*c.esl_band_low - 0.5) / c.max_life_years * 464;
+  const double right =
+      72 + std::min(*c.esl_band_high + 0.5, 1.0 * c.max_life_years) / c.max_life_years * 464;
+  EXPECT_NE(html.find(fmt::format("<rect class=\"shade\" x=\"{:.1f}\" y=\"44.0\" width=\"{:.1f}\"",
+                                  left, right - left)),
+            std::string::npos);
+  EXPECT_NE(html.find(fmt::format(">lives within 2.00% of the least EUAC: {} to {} years<",
+                                  *c.esl_band_low, *c.esl_band_high)),
+            std::string::npos);
+  EXPECT_NE(html.find("The green shade spans the lives whose after-tax EUAC is within 2.00% "
+                      "(esl_band) of the least."),
+            std::string::npos);
+  EXPECT_NE(html.find(fmt::format("bootstrap 10th-90th percentile: {} to {} years (200 refits",
+                                  *c.esl_p10, *c.esl_p90)),
+            std::string::npos);
+
+  // A run stored before these figures: no shade and no sentence.
+  c.esl_band_low = c.esl_band_high = c.esl_p10 = c.esl_p90 = std::nullopt;
+  const std::string older = render_report(data);
+  EXPECT_EQ(count(older, "class=\"shade\""), 0u);
+  EXPECT_EQ(older.find("How firm that life is"), std::string::npos);
 }
 
 TEST(ReportPage, ListsReplaceBeforeReview) {

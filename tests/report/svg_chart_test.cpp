@@ -1,6 +1,6 @@
 // The report's SVG charts: tick steps of 1, 2, 2.5 or 5 times a power of ten that cover the
 // data, escaped titles and legends, dash patterns and markers so colour is not the only cue,
-// and points placed on the plot by the axis ranges.
+// points placed on the plot by the axis ranges, and shades cut to them.
 #include <gtest/gtest.h>
 
 #include <cmath>
@@ -55,6 +55,24 @@ TEST(RenderChart, PlacesTheFirstTickOnTheLeftAxis) {
   const std::string svg = render_chart(c);
   // The path starts at the plot's left edge (72) on the x axis.
   EXPECT_NE(svg.find("<path d=\"M72.0 "), std::string::npos) << svg;
+}
+
+TEST(RenderChart, ShadesAnXRangeUnderTheLinesWithATranslucentSwatch) {
+  Chart c{"t", "years kept", "EUAC"};
+  c.series.push_back({"s", {{1, 10}, {10, 5}}, colour::kBlue, Stroke::solid, Marker::none});
+  c.shades.push_back({7.5, 12.5, "near-best <lives>", colour::kBluishGreen});
+  c.x_range = std::make_pair(0.0, 10.0);
+  const std::string svg = render_chart(c);
+  // By hand: the plot runs from x = 72 to 560 - 24 = 536, so 7.5 of 0..10 is at 72 + 0.75 x 464
+  // = 420.0, and 12.5 is cut to 10, the right edge: width 116.0.
+  const std::size_t shade =
+      svg.find("<rect class=\"shade\" x=\"420.0\" y=\"44.0\" width=\"116.0\"");
+  ASSERT_NE(shade, std::string::npos) << svg;
+  EXPECT_NE(svg.find("fill=\"#009E73\" fill-opacity=\"0.22\"/>", shade), std::string::npos);
+  EXPECT_LT(shade, svg.find("<path d="));  // under the line
+  EXPECT_NE(svg.find("fill=\"#009E73\" fill-opacity=\"0.22\"/><text"),
+            std::string::npos);  // swatch
+  EXPECT_NE(svg.find(">near-best &lt;lives&gt;<"), std::string::npos);
 }
 
 }  // namespace

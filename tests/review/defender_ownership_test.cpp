@@ -28,7 +28,7 @@ ClassModel rising_model() {
   return make_class_model(
       "pump-duty", kPolicy, 1,
       fleet::CostCurve{fleet::CostModel::linear, 1000, 200, 0.9, 30, 0, 10, false},
-      fleet::policy_value_curve(0.2), kRates);
+      fleet::policy_value_curve(0.2), kRates, 0.02);
 }
 
 struct Row {
@@ -91,7 +91,7 @@ TEST(DefenderOwnership, CostsBelowZeroAreReadAsZero) {
   const ClassModel model =
       make_class_model("pump-duty", kPolicy, 1,
                        fleet::CostCurve{fleet::CostModel::linear, 1000, -300, 0.5, 10, 0, 4, false},
-                       fleet::policy_value_curve(0.2), kRates);
+                       fleet::policy_value_curve(0.2), kRates, 0.02);
   const replacement::Ownership own = defender_ownership(model, 10000, 2, 6400, 1.0);
   ASSERT_EQ(own.max_years(), 8);  // by hand: 10 - 2
   EXPECT_DOUBLE_EQ(own.operating_costs[0], 400);
@@ -103,7 +103,7 @@ TEST(DefenderOwnership, CostsBelowZeroAreReadAsZero) {
 
 TEST(DefenderOwnership, WithoutACostCurveTheSeriesAreEmpty) {
   const ClassModel model = make_class_model("pump-duty", kPolicy, 0, std::nullopt,
-                                            fleet::policy_value_curve(0.2), kRates);
+                                            fleet::policy_value_curve(0.2), kRates, 0.02);
   const replacement::Ownership own = defender_ownership(model, 10000, 3, 5120, 1.0);
   EXPECT_TRUE(own.operating_costs.empty());
   EXPECT_TRUE(own.market_values.empty());

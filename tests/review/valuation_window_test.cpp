@@ -127,8 +127,8 @@ TEST(DefenderInputs, MarketValueNowFromTheValuationWindow) {
                                  fleet::CostModelChoice::linear};
   const tax::Rates rates = tax::Rates::make(0.10, 0.25);
   const fleet::CostCurve curve{fleet::CostModel::linear, 1000, 200, 0.9, 30, 0, 10, false};
-  const ClassModel model =
-      make_class_model("pump-duty", class_policy, 1, curve, fleet::policy_value_curve(0.2), rates);
+  const ClassModel model = make_class_model("pump-duty", class_policy, 1, curve,
+                                            fleet::policy_value_curve(0.2), rates, 0.02);
   for (const WindowRow& row : window_rows()) {
     SCOPED_TRACE(row.comment);
     const Date as_of = day(row.as_of);
@@ -154,7 +154,7 @@ TEST(DefenderInputs, CurveValueUsesTheAssetsOwnFirstCostAndAge) {
                                  fleet::CostModelChoice::linear};
   const tax::Rates rates = tax::Rates::make(0.10, 0.25);
   const ClassModel model = make_class_model("van-delivery", class_policy, 1, std::nullopt,
-                                            fleet::policy_value_curve(0.25), rates);
+                                            fleet::policy_value_curve(0.25), rates, 0.02);
   FleetData data(day("2025-06-30"), 0);
   const std::size_t asset =
       testing::add_asset(data, "VN-0001", "van-delivery", day("2023-06-30"), 40000, {});
