@@ -17,6 +17,7 @@
 
 #include <fmt/format.h>
 
+#include <cmath>
 #include <cstdint>
 #include <optional>
 #include <string>
@@ -101,11 +102,20 @@ class TableWriter {
       : table_(table), insert_(db, insert_sql()) {}
 
   // Inserts `row`; `run_id` is the run it belongs to (required for the tables of one run).
+  // Throws RuntimeFailure naming the table and column of a REAL that is not a finite number:
+  // SQLite would store NaN as NULL and the run would say nothing (the review gives such an
+  // asset its own reason first, review/verdict_rule.h rule (0), so this is a last guard).
   void insert(const Row& row, std::optional<std::int64_t> run_id = std::nullopt) {
     int index = 1;
     if (table_.of_run) insert_.bind(index++, *run_id);
     for (const results::Column<Row>& c : table_.columns) {
-      if (!c.options.assigned_by_database) bind_value(insert_, index++, c.get(row));
+      if (c.options.assigned_by_database) continue;
+      const results::Value value = c.get(row);
+      if (const auto* real = std::get_if<double>(&value); real && !std::isfinite(*real)) {
+        throw RuntimeFailure(fmt::format("{}.{}: {} is not a finite number", table_.name, c.name,
+                                         *real));
+      }
+      bind_value(insert_, index++, value);
     }
     insert_.run();
   }

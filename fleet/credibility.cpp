@@ -1,6 +1,8 @@
 // Credibility-weighted asset level (see credibility.h).
 #include "fleet/credibility.h"
 
+#include <cmath>
+
 namespace tenure::fleet {
 
 Credibility credibility(std::span<const Money> year_costs, const CostCurve& curve) {
@@ -12,8 +14,11 @@ Credibility credibility(std::span<const Money> year_costs, const CostCurve& curv
     observed += year_costs[static_cast<std::size_t>(k - 1)];
     predicted += curve.predict(k);
   }
-  if (m == 0 || !(predicted > 0)) return {m, 1.0, z, 1.0, false};  // rule (5)
+  if (m == 0 || !(predicted > 0) || !std::isfinite(predicted)) {
+    return {m, 1.0, z, 1.0, false};  // rule (5)
+  }
   const double r = observed / predicted;
+  if (!std::isfinite(r) || !std::isfinite(1 + z * (r - 1))) return {m, 1.0, z, 1.0, false};
   return {m, r, z, 1 + z * (r - 1), true};
 }
 

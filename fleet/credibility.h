@@ -10,8 +10,9 @@
 //       a ratio of totals, so one odd year weighs by its money, not as a ratio of its own.
 //   (3) z = m / (m + kCredibilityYears), kCredibilityYears = 3.
 //   (4) factor = 1 + z (r - 1).
-//   (5) With m = 0, or a predicted total <= 0 (a falling linear curve, say), r cannot be
-//       measured: r is reported as 1, so factor = 1 (the class curve as is), measured = false.
+//   (5) With m = 0, a predicted total <= 0 (a falling linear curve, say) or one so small or large
+//       that r is not a finite number, r cannot be measured: r is reported as 1, so factor = 1
+//       (the class curve as is), measured = false.
 #pragma once
 
 #include <span>

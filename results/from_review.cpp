@@ -1,6 +1,8 @@
 // Rows of what the review computed (see from_review.h).
 #include "results/from_review.h"
 
+#include <cmath>
+
 namespace tenure::results {
 
 using replacement::Basis;
@@ -32,7 +34,8 @@ ClassRow class_row(const review::ClassModel& m) {
     row.cost_model = m.cost_curve->model;
     row.cost_a = m.cost_curve->a;
     row.cost_g = m.cost_curve->g;
-    row.cost_r2 = m.cost_curve->r2;
+    // A fit whose predictions overflow at the highest ages has no finite r2: none is stored.
+    if (std::isfinite(m.cost_curve->r2)) row.cost_r2 = m.cost_curve->r2;
     row.asset_years = static_cast<std::int64_t>(m.cost_curve->asset_years);
   }
   row.value_model = m.value_curve.model;

@@ -2,6 +2,9 @@
 #include "review/asset_review.h"
 
 #include <algorithm>
+#include <cmath>
+#include <optional>
+#include <string_view>
 
 #include "depreciation/schedule.h"
 
@@ -64,6 +67,68 @@ AssetReview review_asset(std::size_t asset, const FleetData& data, const ClassMo
   return judge(asset, defender_inputs(asset, data, model), model, policy);
 }
 
+namespace {
+
+// The first figure of `r` that is not a finite number, by the name it is stored or shown under;
+// none when all are.
+std::optional<std::string_view> first_non_finite(const AssetReview& r) {
+  const auto bad = [](double x) { return !std::isfinite(x); };
+  const replacement::Ownership& own = r.inputs.ownership;
+  if (std::any_of(own.operating_costs.begin(), own.operating_costs.end(), bad)) {
+    return "expected operating cost";
+  }
+  if (std::any_of(own.market_values.begin(), own.market_values.end(), bad)) {
+    return "expected market value";
+  }
+  if (bad(r.inputs.market_value_now)) return "market_value_now";
+  if (bad(r.book_value_now)) return "book_value_now";
+  if (r.defender_euac_before_tax && bad(*r.defender_euac_before_tax)) {
+    return "defender_euac_before_tax";
+  }
+  if (r.defender_euac_after_tax && bad(*r.defender_euac_after_tax)) return "defender_euac_after_tax";
+  if (r.marginal_cost_next_year && bad(*r.marginal_cost_next_year)) {
+    return "marginal_cost_next_year";
+  }
+  if (r.defender) {
+    for (const auto* analysis : {&r.defender->before_tax, r.defender->after_tax ? &*r.defender->after_tax : nullptr}) {
+      if (!analysis) continue;
+      const replacement::LifeCurve& c = analysis->curve;
+      if (std::any_of(c.euac.begin(), c.euac.end(), bad)) return "defender EUAC curve";
+      if (std::any_of(c.marginal_costs.begin(), c.marginal_costs.end(), bad)) {
+        return "defender marginal costs";
+      }
+    }
+  }
+  if (r.decision) {
+    const std::vector<Money>& t = r.decision->timing.present_worth;
+    if (std::any_of(t.begin(), t.end(), bad)) return "timing present worth";
+  }
+  if (r.at_stake) {
+    const AtStake& s = *r.at_stake;
+    if (s.delay_cost && bad(*s.delay_cost)) return "delay_cost";
+    if (bad(s.early_cost)) return "early_cost";
+    if (bad(s.repair_limit)) return "repair_limit";
+    if (s.break_even_price && bad(*s.break_even_price)) return "break_even_price";
+    if (s.break_even_cost_factor && bad(*s.break_even_cost_factor)) {
+      return "break_even_cost_factor";
+    }
+  }
+  return std::nullopt;
+}
+
+// Keeps what the asset is (its inputs as read) and drops every figure of its analysis.
+void drop_analysis(AssetReview& r) {
+  r.defender.reset();
+  r.decision.reset();
+  r.at_stake.reset();
+  r.defender_euac_before_tax.reset();
+  r.defender_euac_after_tax.reset();
+  r.marginal_cost_next_year.reset();
+  r.class_esl_years.reset();
+}
+
+}  // namespace
+
 AssetReview judge(std::size_t asset, DefenderInputs inputs, const ClassModel& model,
                   const Policy& policy) {
   const tax::Rates& rates = policy.rates;
@@ -92,6 +157,11 @@ AssetReview judge(std::size_t asset, DefenderInputs inputs, const ClassModel& mo
                     r.inputs.age_years, policy.lead_time_years);
   r.at_stake = at_stake(d, *r.defender, r.inputs.ownership, model.price_lines,
                         model.policy->challenger_first_cost, rates, policy.review_margin);
+  if (const auto figure = first_non_finite(r)) {  // rule (0): never stored
+    drop_analysis(r);
+    if (!std::isfinite(r.book_value_now)) r.book_value_now = 0;
+    r.finding = overflowed(*figure);
+  }
   return r;
 }
 

@@ -2,6 +2,7 @@
 #include "review/class_model.h"
 
 #include <algorithm>
+#include <cmath>
 
 #include <fmt/format.h>
 
@@ -41,6 +42,16 @@ std::optional<EslSpread> spread_of(const ClassModel& model, const FleetData& dat
             challenger_ownership(*model.policy, refitted, model.value_curve, model.depreciation),
             rates);
       });
+}
+
+bool all_finite(const replacement::AssetAnalysis& a) {
+  const auto finite = [](const std::vector<Money>& xs) {
+    return std::all_of(xs.begin(), xs.end(), [](double x) { return std::isfinite(x); });
+  };
+  for (const auto* on : {&a.before_tax, a.after_tax ? &*a.after_tax : nullptr}) {
+    if (on && !(finite(on->curve.euac) && finite(on->curve.marginal_costs))) return false;
+  }
+  return true;
 }
 
 }  // namespace
@@ -100,6 +111,15 @@ ClassModel make_class_model(const std::string& asset_class, const ClassPolicy& p
   }
   const replacement::Basis basis = decision_basis(rates);
   model.challenger = replacement::analyse_asset(challenger, rates);
+  if (!all_finite(*model.challenger)) {
+    // Its assets then cannot be weighed (verdict_rule.h rule (0)); no figure is stored.
+    model.challenger.reset();
+    model.note = fmt::format("the challenger's figures for class '{}' overflow (they are not "
+                             "finite numbers): its cost curve grows too fast over "
+                             "max_life_years {}",
+                             asset_class, policy.max_life_years);
+    return model;
+  }
   model.price_lines = replacement::price_lines(challenger, *model.challenger, rates, basis);
   model.band = esl_band(model.challenger->on(basis).curve.euac, band_width);
   model.challenger_input = std::move(challenger);

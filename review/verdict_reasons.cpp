@@ -55,6 +55,14 @@ std::string cannot_weigh_reason(std::string_view why) {
       why);
 }
 
+std::string overflow_reason(std::string_view figure) {
+  return fmt::format(
+      "Review: its {} overflows (it is not a finite number), so tenure cannot weigh this asset; "
+      "check its in-service date and the class's cost curve, which may grow too fast for its "
+      "age.",
+      figure);
+}
+
 std::string verdict_headline(const VerdictFinding& f) {
   std::string words = f.verdict == Verdict::replace  ? "REPLACE now"
                       : f.verdict == Verdict::review ? "REVIEW"

@@ -18,6 +18,7 @@ std::string verdict_reason(VerdictTest test, const VerdictFigures& figures, Year
                            Years lead_time_years);
 // Rule (0).
 std::string cannot_weigh_reason(std::string_view why);
+std::string overflow_reason(std::string_view figure);
 
 // The verdict as a headline: "REPLACE now", "REVIEW (cheapest: replace after 2 years more)",
 // "KEEP (cheapest: replace after 6 years more)".

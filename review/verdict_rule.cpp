@@ -54,4 +54,10 @@ VerdictFinding cannot_weigh(std::string_view why) {
   return f;
 }
 
+VerdictFinding overflowed(std::string_view figure) {
+  VerdictFinding f;  // rule (0)
+  f.reason = overflow_reason(figure);
+  return f;
+}
+
 }  // namespace tenure::review

@@ -9,8 +9,9 @@
 //   f.reason;       // "Review: at 9 years it is at or past a new unit's economic life of ..."
 //
 // Rules (cited by the code):
-//   (0) An asset whose class cannot be weighed (no cost curve, so no challenger) is under review,
-//       the reason saying why.
+//   (0) An asset that cannot be weighed is under review, the reason saying why: its class has no
+//       cost curve (so no challenger), or one of its figures is not a finite number (a curve that
+//       grows too fast for its age, say), which is never stored.
 //   (1) replace when k* = 0: keeping it any longer costs more than a new unit.
 //   (2) Otherwise review when its age is at or past the challenger's economic service life on
 //       the decision's basis (for the nightly review, the class's economic life).
@@ -74,5 +75,7 @@ struct VerdictFinding {
 VerdictFinding weigh(const VerdictFigures& figures, Years age, Years lead_time_years);
 // Rule (0): `why` says what is missing, e.g. the class model's note.
 VerdictFinding cannot_weigh(std::string_view why);
+// Rule (0) for an asset one of whose figures overflows a double: `figure` names it.
+VerdictFinding overflowed(std::string_view figure);
 
 }  // namespace tenure::review
