@@ -5,6 +5,8 @@
 
 #include <fmt/format.h>
 
+#include "core/errors.h"
+
 namespace tenure::db {
 
 std::optional<Date> CostRows::DateMemo::parse(std::string_view text) {
@@ -71,7 +73,7 @@ void CostRows::read(const EventBatch& batch) {
       ++rows_after_as_of_;
       continue;
     }
-    switch (totals_.add_event(asset, *occurred, e.amount)) {
+    switch (add_event(asset, *occurred, e, batch)) {
       case fleet::EventFate::counted:
       case fleet::EventFate::outside_complete_years:
         break;
@@ -85,6 +87,20 @@ void CostRows::read(const EventBatch& batch) {
         reject(*amount_problem(e.amount_type, e.amount, batch.amount_text(e), "amount"));
         break;
     }
+  }
+}
+
+fleet::EventFate CostRows::add_event(std::uint32_t asset, Date occurred, const RawEvent& e,
+                                     const EventBatch& batch) {
+  try {
+    return totals_.add_event(asset, occurred, e.amount);
+  } catch (const InputError& error) {
+    // A restatement beyond what a double can add up: say which row, and what to change.
+    throw InputError(error.where(),
+                     fmt::format("{} (asset_id {}, occurred_on {}): {} in {} money; review as "
+                                 "of a nearer date (--as-of) or with a smaller cost_escalation",
+                                 source_, shown(batch.id(e)), shown(batch.date(e)), error.rule(),
+                                 data_.as_of.to_iso()));
   }
 }
 

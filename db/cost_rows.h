@@ -41,6 +41,10 @@ class CostRows {
     std::string reason;
   };
 
+  // Adds one checked event to the totals; a restatement too large to add names the row.
+  fleet::EventFate add_event(std::uint32_t asset, Date occurred, const RawEvent& e,
+                             const EventBatch& batch);
+
   // Cost events arrive in date order, so most rows repeat the previous row's date text: parse it
   // once per distinct text.
   class DateMemo {

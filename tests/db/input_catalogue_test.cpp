@@ -342,7 +342,18 @@ TEST_F(InputCatalogue, EscalationToAFarFutureAsOfIsRefusedAndWritesNothing) {
   std::string policy = catalogue_policy();
   policy.insert(policy.find("\"classes\""), "\"cost_escalation\": 0.2, ");
   Connection db = file.open();
-  EXPECT_THROW(app::run_review(db, {policy, parse_iso_date("9999-12-31"), {}, {}}), InputError);
+  try {
+    app::run_review(db, {policy, parse_iso_date("9999-12-31"), {}, {}});
+    ADD_FAILURE() << "expected an InputError";
+  } catch (const InputError& e) {
+    // It names the row, the as-of date's money and what to change.
+    EXPECT_EQ(e.where(), "cost_escalation");
+    EXPECT_EQ(e.rule().rfind("cost_event (asset_id 'PF-", 0), 0u) << e.rule();
+    EXPECT_NE(e.rule().find("in 9999-12-31 money; review as of a nearer date (--as-of) or with "
+                            "a smaller cost_escalation"),
+              std::string::npos)
+        << e.rule();
+  }
   EXPECT_EQ(scalar(db, "SELECT count(*) FROM sqlite_schema WHERE name LIKE 'tenure_%'"), 0);
   // The same escalation to an ordinary as-of date is fine.
   app::run_review(db, {policy, parse_iso_date(fixtures::kAsOf), {}, {}});
