@@ -5,7 +5,7 @@ namespace tenure::db {
 
 namespace {
 constexpr std::string_view kCreate =
-    "CREATE TABLE IF NOT EXISTS tenure_policy("
+    "CREATE TABLE IF NOT EXISTS main.tenure_policy("
     " policy_id INTEGER PRIMARY KEY,"
     " stored_at TEXT NOT NULL DEFAULT (strftime('%Y-%m-%dT%H:%M:%SZ','now')),"
     " policy_json TEXT NOT NULL)";
@@ -16,7 +16,7 @@ void create_policy_table(Connection& db) { db.exec(kCreate); }
 std::int64_t store_policy(Connection& db, std::string_view policy_json) {
   Transaction tx(db, Transaction::Kind::immediate);
   create_policy_table(db);
-  Statement insert(db, "INSERT INTO tenure_policy(policy_json) VALUES (?1)");
+  Statement insert(db, "INSERT INTO main.tenure_policy(policy_json) VALUES (?1)");
   insert.bind(1, policy_json);
   insert.run();
   const std::int64_t id = sqlite3_last_insert_rowid(db.handle());
@@ -27,7 +27,7 @@ std::int64_t store_policy(Connection& db, std::string_view policy_json) {
 std::optional<std::string> latest_policy(Connection& db) {
   Statement exists(db, "SELECT 1 FROM sqlite_schema WHERE type = 'table' AND name = 'tenure_policy'");
   if (!exists.step()) return std::nullopt;
-  Statement latest(db, "SELECT policy_json FROM tenure_policy ORDER BY policy_id DESC LIMIT 1");
+  Statement latest(db, "SELECT policy_json FROM main.tenure_policy ORDER BY policy_id DESC LIMIT 1");
   if (!latest.step()) return std::nullopt;
   return std::string(latest.text(0));
 }

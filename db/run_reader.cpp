@@ -40,7 +40,7 @@ std::vector<Row> rows_where(Connection& db, const results::Table<Row>& table,
 // baseline run just before it in tenure_run_order; for a what-if run, the latest baseline run.
 constexpr const char* kComparedRun =
     "(SELECT CASE WHEN scenario IS NULL THEN previous_run_id "
-    "ELSE (SELECT run_id FROM tenure_latest_run) END FROM tenure_run_order WHERE run_id = ?1)";
+    "ELSE (SELECT run_id FROM main.tenure_latest_run) END FROM main.tenure_run_order WHERE run_id = ?1)";
 
 template <class Row>
 std::optional<Row> first(std::vector<Row> rows) {
@@ -57,7 +57,7 @@ results::RunRow read_run(Connection& db, std::optional<std::int64_t> run_id) {
   // The latest baseline run as the views define it (schema.h, tenure_latest_run).
   Statement q(db, select_sql(results::run_table()) +
                       " WHERE status = 'ok' AND run_id = coalesce(?1, "
-                      "(SELECT run_id FROM tenure_latest_run))");
+                      "(SELECT run_id FROM main.tenure_latest_run))");
   q.bind(1, run_id);
   if (!q.step()) {
     if (run_id) throw InputError("--run", fmt::format("no successful run {}", *run_id));
@@ -107,7 +107,7 @@ std::vector<results::RejectedRow> read_rejected(Connection& db, std::int64_t run
 }
 
 std::unordered_set<std::string> due_in_previous_run(Connection& db, std::int64_t run_id) {
-  Statement q(db, std::string("SELECT asset_id FROM tenure_asset_result WHERE verdict IN "
+  Statement q(db, std::string("SELECT asset_id FROM main.tenure_asset_result WHERE verdict IN "
                               "('review', 'replace') AND run_id = ") +
                       kComparedRun);
   q.bind(1, run_id);
@@ -117,9 +117,9 @@ std::unordered_set<std::string> due_in_previous_run(Connection& db, std::int64_t
 }
 
 std::int64_t count_newly_due(Connection& db, std::int64_t run_id) {
-  Statement q(db, std::string("SELECT count(*) FROM tenure_asset_result AS d WHERE d.run_id = ?1 "
+  Statement q(db, std::string("SELECT count(*) FROM main.tenure_asset_result AS d WHERE d.run_id = ?1 "
                               "AND d.verdict IN ('review', 'replace') AND NOT EXISTS ("
-                              "SELECT 1 FROM tenure_asset_result AS p WHERE p.asset_id = "
+                              "SELECT 1 FROM main.tenure_asset_result AS p WHERE p.asset_id = "
                               "d.asset_id AND p.verdict IN ('review', 'replace') AND p.run_id = ") +
                       kComparedRun + ")");
   q.bind(1, run_id);

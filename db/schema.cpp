@@ -114,10 +114,10 @@ CREATE VIEW tenure_scenario_diff AS
 
 // Dependent views first.
 constexpr std::string_view kDropViews =
-    "DROP VIEW IF EXISTS tenure_scenario_diff; DROP VIEW IF EXISTS tenure_newly_due; "
-    "DROP VIEW IF EXISTS tenure_due; DROP VIEW IF EXISTS tenure_latest; "
-    "DROP VIEW IF EXISTS tenure_class_latest; DROP VIEW IF EXISTS tenure_latest_run; "
-    "DROP VIEW IF EXISTS tenure_run_order;";
+    "DROP VIEW IF EXISTS main.tenure_scenario_diff; DROP VIEW IF EXISTS main.tenure_newly_due; "
+    "DROP VIEW IF EXISTS main.tenure_due; DROP VIEW IF EXISTS main.tenure_latest; "
+    "DROP VIEW IF EXISTS main.tenure_class_latest; DROP VIEW IF EXISTS main.tenure_latest_run; "
+    "DROP VIEW IF EXISTS main.tenure_run_order;";
 
 // Calls f(table) for each stored table, in the order they are created.
 template <class F>
@@ -136,10 +136,10 @@ int current_schema_version() { return results::newest_column_version(); }
 
 void migrate(Connection& db) {
   db.exec(
-      "CREATE TABLE IF NOT EXISTS tenure_schema_version("
+      "CREATE TABLE IF NOT EXISTS main.tenure_schema_version("
       " version INTEGER PRIMARY KEY,"
       " applied_at TEXT NOT NULL DEFAULT (strftime('%Y-%m-%dT%H:%M:%SZ','now')))");
-  Statement current(db, "SELECT coalesce(max(version), 0) FROM tenure_schema_version");
+  Statement current(db, "SELECT coalesce(max(version), 0) FROM main.tenure_schema_version");
   current.step();
   const auto applied = static_cast<int>(current.integer(0));
   current.reset();
@@ -158,7 +158,7 @@ void migrate(Connection& db) {
   }
   db.exec(kDropViews);
   db.exec(views_sql());
-  Statement record(db, "INSERT INTO tenure_schema_version(version) VALUES (?1)");
+  Statement record(db, "INSERT INTO main.tenure_schema_version(version) VALUES (?1)");
   for (int v = applied + 1; v <= target; ++v) {
     record.bind(1, std::int64_t{v});
     record.run();

@@ -1,6 +1,7 @@
 // The SQL of a stored table, generated from its column list (results/tables.h): CREATE TABLE with
 // its indexes, ALTER TABLE ... ADD COLUMN for a later column, the INSERT and the SELECT, and the
-// binding and reading of one row through the columns' accessors. Every value is bound.
+// binding and reading of one row through the columns' accessors. Every value is bound, and every
+// name is qualified main.: a host's TEMP table of the same name is never read or written.
 //
 //   TableWriter<AssetRow> assets(db, results::asset_table());
 //   assets.insert(row, run_id);
@@ -44,7 +45,7 @@ std::string create_table_sql(const results::Table<Row>& table) {
     lines.emplace_back(fmt::format("{} {}", c.name, c.sql_type), c.options.note);
   }
   if (!table.constraints.empty()) lines.emplace_back(std::string(table.constraints), "");
-  std::string sql = fmt::format("CREATE TABLE {}(\n", table.name);
+  std::string sql = fmt::format("CREATE TABLE main.{}(\n", table.name);
   for (std::size_t i = 0; i < lines.size(); ++i) {
     const std::string line = "  " + lines[i].first + (i + 1 < lines.size() ? "," : "");
     // Notes line up at column 40, as a person would write them.
@@ -56,14 +57,14 @@ std::string create_table_sql(const results::Table<Row>& table) {
     }
   }
   for (const results::Index& index : table.indexes) {
-    sql += fmt::format("CREATE INDEX {} ON {}{};\n", index.name, table.name, index.columns);
+    sql += fmt::format("CREATE INDEX main.{} ON {}{};\n", index.name, table.name, index.columns);
   }
   return sql;
 }
 
 template <class Row>
 std::string add_column_sql(const results::Table<Row>& table, const results::Column<Row>& c) {
-  return fmt::format("ALTER TABLE {} ADD COLUMN {} {}", table.name, c.name, c.sql_type);
+  return fmt::format("ALTER TABLE main.{} ADD COLUMN {} {}", table.name, c.name, c.sql_type);
 }
 
 // "SELECT a, b, ... FROM table": the row's columns in table order (not run_id, for the tables of
@@ -72,7 +73,7 @@ template <class Row>
 std::string select_sql(const results::Table<Row>& table) {
   std::vector<std::string_view> names;
   for (const results::Column<Row>& c : table.columns) names.push_back(c.name);
-  return fmt::format("SELECT {} FROM {}", fmt::join(names, ", "), table.name);
+  return fmt::format("SELECT {} FROM main.{}", fmt::join(names, ", "), table.name);
 }
 
 // The row at the statement's current step, its columns in select_sql's order. Throws
@@ -129,7 +130,7 @@ class TableWriter {
     }
     std::vector<std::string> places;
     for (std::size_t i = 1; i <= names.size(); ++i) places.push_back(fmt::format("?{}", i));
-    return fmt::format("INSERT INTO {}({}) VALUES ({})", table_.name, fmt::join(names, ", "),
+    return fmt::format("INSERT INTO main.{}({}) VALUES ({})", table_.name, fmt::join(names, ", "),
                        fmt::join(places, ", "));
   }
 
