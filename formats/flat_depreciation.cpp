@@ -6,6 +6,7 @@
 #include <fmt/format.h>
 #include <nlohmann/json.hpp>
 
+#include "core/checks.h"
 #include "formats/depreciation_json.h"
 #include "formats/json_path.h"
 
@@ -90,6 +91,9 @@ FlatSchedule flat_schedule(const FlatDepreciation& flat, const MisfitRefusals& r
   const nlohmann::json object = depreciation_object(flat, *form, refusals);
   try {
     const depreciation::Spec spec = read_depreciation(JsonObject(object, "$"));  // rule (4)
+    // The bound of every amount tenure reads (core/checks.h): 1e308 would print infinities.
+    require_amount(*flat.basis, "basis");
+    if (flat.salvage) require_amount(*flat.salvage, "salvage");
     depreciation::Schedule schedule(*depreciation::make_method(spec), *flat.basis);
     std::optional<Years> disposal_year;  // rule (5)
     if (flat.disposal_year) disposal_year = whole_years(*flat.disposal_year, "disposal_year", 1);

@@ -21,7 +21,8 @@
 //       salvage of 0 counts as not given: macrs and none recover the whole basis, so a zero
 //       salvage says nothing they would ignore.
 //   (4) The values are checked as a case file's: life whole years >= 1 (macrs: 3, 5, 7, 10, 15
-//       or 20), rate > 0, salvage >= 0 and not above the basis, basis > 0.
+//       or 20), rate > 0, salvage >= 0 and not above the basis, basis > 0, and basis and salvage
+//       at most 1e15 in magnitude, the bound of every amount (core/checks.h).
 //   (5) disposal_year, when given, is a whole year >= 1.
 // Rules (2) and (3) are checked parameter by parameter in the order of FlatDepreciation.
 #pragma once

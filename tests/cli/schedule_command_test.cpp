@@ -92,6 +92,12 @@ TEST(ScheduleCommand, ParametersAreRequiredAndCheckedByOption) {
              "tenure schedule: --salvage: must not exceed the basis");
   expect_bad({"schedule", "--method", "none", "--basis", "-1"},
              "tenure schedule: --basis: must be > 0");
+  // The bound of every amount (core/checks.h); 1e308 printed infinities.
+  expect_bad({"schedule", "--method", "macrs", "--life", "5", "--basis", "1e308"},
+             "tenure schedule: --basis: must be at most 1e15 in magnitude (no equipment costs more)");
+  expect_bad({"schedule", "--method", "straight_line", "--life", "5", "--salvage", "2e15",
+              "--basis", "3e15"},
+             "tenure schedule: --basis: must be at most 1e15 in magnitude (no equipment costs more)");
   expect_bad({"schedule", "--method", "none", "--basis", "100", "--dispose-in-year", "0"},
              "tenure schedule: --dispose-in-year: must be >= 1");
   expect_bad({"schedule", "--method", "double", "--basis", "100"},

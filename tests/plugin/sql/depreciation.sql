@@ -91,3 +91,6 @@ SELECT tenure_book_value('straight_line', 10000, 0, 5, 1, 2); -- error: wrong nu
 SELECT tenure_macrs_rate(4, 1); -- error: tenure_macrs_rate: 1st argument (recovery_years) must be one of 3, 5, 7, 10, 15, 20
 SELECT tenure_macrs_rate(5, 0); -- error: tenure_macrs_rate: 2nd argument (year) must be >= 1
 SELECT tenure_macrs_rate(NULL, 1); -- error: tenure_macrs_rate: 1st argument (recovery_years) must be a number
+SELECT * FROM tenure_depreciation('macrs', 1e307, 0, 5); -- error: tenure_depreciation: 2nd argument (basis) must be at most 1e15 in magnitude (no equipment costs more)
+SELECT tenure_book_value('straight_line', 1e308, 0, 5, 1); -- error: tenure_book_value: 2nd argument (basis) must be at most 1e15 in magnitude (no equipment costs more)
+SELECT tenure_book_value('straight_line', 1e15, 0, 5, 5) = 0;
