@@ -37,10 +37,12 @@ bool copy_text(sqlite3_value* value, std::string& arena, std::uint32_t& offset,
 void append_row(EventBatch& batch, sqlite3_value** values) {
   RawEvent e{};
   // Ids and dates are read as text whatever their storage class (an id stored as a number is its
-  // text; a date stored as a number never parses), so only NULL matters for them.
-  e.id_type = copy_text(values[0], batch.text, e.id_offset, e.id_length) ? SQLITE_TEXT : SQLITE_NULL;
-  e.date_type =
-      copy_text(values[1], batch.text, e.date_offset, e.date_length) ? SQLITE_TEXT : SQLITE_NULL;
+  // text; a date stored as a number never parses); their storage class is kept, so that a NULL
+  // is missing and a BLOB refused (db/row_checks.h).
+  e.id_type = static_cast<std::uint8_t>(sqlite3_value_type(values[0]));
+  copy_text(values[0], batch.text, e.id_offset, e.id_length);
+  e.date_type = static_cast<std::uint8_t>(sqlite3_value_type(values[1]));
+  copy_text(values[1], batch.text, e.date_offset, e.date_length);
   e.amount_type = static_cast<std::uint8_t>(sqlite3_value_type(values[2]));
   if (e.amount_type == SQLITE_INTEGER || e.amount_type == SQLITE_FLOAT) {
     e.amount = sqlite3_value_double(values[2]);

@@ -32,8 +32,8 @@
 
 namespace tenure::db {
 
-// One row as read: where its text is kept, SQLITE_TEXT or SQLITE_NULL for the id and the date,
-// and the amount's storage class (SQLITE_INTEGER, SQLITE_FLOAT, ...).
+// One row as read: where the text of its id and date (and of an amount that is not a number) is
+// kept, and the storage class of each (SQLITE_TEXT, SQLITE_INTEGER, SQLITE_NULL, SQLITE_BLOB...).
 struct RawEvent {
   std::uint32_t id_offset;
   std::uint32_t id_length;

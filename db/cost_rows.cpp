@@ -55,14 +55,16 @@ void CostRows::read(const EventBatch& batch) {
                                        shown_or_null(e.date_type == SQLITE_NULL, batch.date(e))),
                            std::move(why)});
     };
-    std::uint32_t asset = e.id_type != SQLITE_NULL ? assets_[i] : fleet::AssetIndex::npos;
+    std::uint32_t asset = e.id_type != SQLITE_NULL && e.id_type != SQLITE_BLOB
+                              ? assets_[i]
+                              : fleet::AssetIndex::npos;
     if (asset == fleet::AssetIndex::npos) {
-      asset = accepted_.find(batch.id(e), e.id_type == SQLITE_NULL, reason);
+      asset = accepted_.find(batch.id(e), e.id_type, reason);
       if (asset == fleet::AssetIndex::npos) { reject(reason); continue; }
     }
     const std::optional<Date>& occurred = days_[i];
     if (!occurred) {
-      reject(bad_date("occurred_on", e.date_type == SQLITE_NULL, batch.date(e)));
+      reject(bad_date("occurred_on", e.date_type, batch.date(e)));
       continue;
     }
     if (auto problem = amount_problem(e.amount_type, e.amount, batch.amount_text(e), "amount")) {

@@ -1,6 +1,7 @@
 // Reading the input relations with validation and rejected rows (see fleet_reader.h).
 #include "db/fleet_reader.h"
 
+#include <array>
 #include <exception>
 #include <optional>
 #include <string_view>
@@ -30,18 +31,29 @@ struct RequiredColumns {
   std::vector<const char*> columns;
 };
 
+// The storage class of each column of the current row, read before any value: reading a value as
+// text or as a number converts it, after which SQLite no longer says what it was stored as.
+template <std::size_t N>
+std::array<int, N> storage_classes(const Statement& q) {
+  std::array<int, N> types{};
+  for (std::size_t c = 0; c < N; ++c) types[c] = q.column_type(static_cast<int>(c));
+  return types;
+}
+
 // A column's value as text for messages, whatever its storage class.
-std::string shown_value(const Statement& q, int column) {
-  return shown_or_null(q.is_null(column), q.text(column));
+std::string shown_value(const Statement& q, int column, int type) {
+  return shown_or_null(type == SQLITE_NULL, q.text(column));
 }
 
 // Rules (1) to (3) for an amount column (row_checks.h).
-std::optional<std::string> number_problem(const Statement& q, int column, const char* name) {
-  return amount_problem(q.column_type(column), q.real(column), q.text(column), name);
+std::optional<std::string> number_problem(const Statement& q, int column, int type,
+                                          const char* name) {
+  const double value = q.real(column);
+  return amount_problem(type, value, q.text(column), name);
 }
 
-std::optional<Date> date_column(const Statement& q, int column) {
-  if (q.column_type(column) != SQLITE_TEXT) return std::nullopt;
+std::optional<Date> date_column(const Statement& q, int column, int type) {
+  if (type != SQLITE_TEXT) return std::nullopt;
   return parse_iso_date(q.text(column));
 }
 
@@ -53,8 +65,8 @@ std::string ascii_lower(std::string_view text) {
   return out;
 }
 
-std::string bad_date(const Statement& q, int column, const char* name) {
-  return db::bad_date(name, q.is_null(column), q.text(column));
+std::string bad_date(const Statement& q, int column, int type, const char* name) {
+  return db::bad_date(name, type, q.text(column));
 }
 
 class Reader {
@@ -83,15 +95,20 @@ class Reader {
     while (q.step()) {
       ++row;
       ++report_.rows_read;
+      const auto type = storage_classes<5>(q);
       const std::string_view id = q.text(0);
-      const std::string ref = q.is_null(0) ? fmt::format("row {}", row)
-                                           : fmt::format("row {} (asset_id {})", row, shown(id));
+      const std::string ref = type[0] == SQLITE_NULL
+                                  ? fmt::format("row {}", row)
+                                  : fmt::format("row {} (asset_id {})", row, shown(id));
       const auto fail = [&](std::string reason) {
-        if (!q.is_null(0) && !id.empty()) accepted_.rejected_ids.emplace(id);
+        if (type[0] != SQLITE_NULL && !id.empty()) accepted_.rejected_ids.emplace(id);
         reject(source, ref, std::move(reason));
       };
       // Rule (1).
-      if (q.is_null(0) || id.empty()) { fail("asset_id is missing"); continue; }
+      if (auto problem = id_problem(type[0], id)) {
+        reject(source, ref, std::move(*problem));
+        continue;
+      }
       if (!valid_utf8(id)) { fail("asset_id is not valid UTF-8"); continue; }
       if (id.size() > kMaxIdBytes) { fail(fmt::format("asset_id is longer than {} bytes", kMaxIdBytes)); continue; }
       if (accepted_.index.contains(id)) {
@@ -99,19 +116,20 @@ class Reader {
         continue;
       }
       const std::string_view asset_class = q.text(1);
-      if (q.is_null(1) || asset_class.empty()) { fail("asset_class is missing"); continue; }
+      if (type[1] == SQLITE_NULL || asset_class.empty()) { fail("asset_class is missing"); continue; }
+      if (type[1] == SQLITE_BLOB) { fail("asset_class is a BLOB, not text"); continue; }
       if (!policy_.classes.contains(asset_class)) {
         fail(fmt::format("asset_class {} is not among the policy's classes", shown(asset_class)));
         continue;
       }
-      const auto in_service = date_column(q, 2);
-      if (!in_service) { fail(bad_date(q, 2, "in_service_on")); continue; }
-      if (auto problem = number_problem(q, 3, "first_cost")) { fail(*problem); continue; }
+      const auto in_service = date_column(q, 2, type[2]);
+      if (!in_service) { fail(bad_date(q, 2, type[2], "in_service_on")); continue; }
+      if (auto problem = number_problem(q, 3, type[3], "first_cost")) { fail(*problem); continue; }
       if (q.real(3) <= 0) { fail(fmt::format("first_cost {} must be greater than 0", q.real(3))); continue; }
       std::optional<Date> retired;
-      if (!q.is_null(4)) {
-        retired = date_column(q, 4);
-        if (!retired) { fail(bad_date(q, 4, "retired_on")); continue; }
+      if (type[4] != SQLITE_NULL) {
+        retired = date_column(q, 4, type[4]);
+        if (!retired) { fail(bad_date(q, 4, type[4], "retired_on")); continue; }
         if (*retired < *in_service) { fail("retired_on is before in_service_on"); continue; }
       }
       const auto index = data_.add_asset(
@@ -167,16 +185,24 @@ class Reader {
     while (q.step()) {
       ++row;
       ++report_.rows_read;
+      const auto type = storage_classes<3>(q);
       const auto ref = [&] {
-        return fmt::format("row {} (asset_id {}, valued_on {})", row, shown_value(q, 0),
-                           shown_value(q, 1));
+        return fmt::format("row {} (asset_id {}, valued_on {})", row, shown_value(q, 0, type[0]),
+                           shown_value(q, 1, type[1]));
       };
-      const std::uint32_t asset = accepted_.find(q.text(0), q.is_null(0), reason);
+      const std::uint32_t asset = accepted_.find(q.text(0), type[0], reason);
       if (asset == fleet::AssetIndex::npos) { reject(source, ref(), reason); continue; }
       const review::AssetRecord& record = data_.assets[asset];
-      const auto valued = date_column(q, 1);
-      if (!valued) { reject(source, ref(), bad_date(q, 1, "valued_on")); continue; }
-      if (auto problem = number_problem(q, 2, "amount")) { reject(source, ref(), *problem); continue; }
+      const auto valued = date_column(q, 1, type[1]);
+      if (!valued) {
+        const std::string why = bad_date(q, 1, type[1], "valued_on");
+        reject(source, ref(), why);
+        continue;
+      }
+      if (auto problem = number_problem(q, 2, type[2], "amount")) {
+        reject(source, ref(), *problem);
+        continue;
+      }
       if (q.real(2) < 0) { reject(source, ref(), "amount must not be negative"); continue; }
       if (*valued < record.in_service) {
         reject(source, ref(), before_in_service("valued_on", record));

@@ -73,9 +73,16 @@ std::string shown_or_null(bool is_null, std::string_view text) {
   return is_null ? std::string("NULL") : shown(text);
 }
 
+std::optional<std::string> id_problem(int type, std::string_view id) {
+  if (type == SQLITE_NULL || id.empty()) return std::string("asset_id is missing");
+  if (type == SQLITE_BLOB) return std::string("asset_id is a BLOB, not text");
+  return std::nullopt;
+}
+
 std::optional<std::string> amount_problem(int type, double value, std::string_view text,
                                           const char* name) {
   if (type == SQLITE_NULL) return fmt::format("{} is missing", name);
+  if (type == SQLITE_BLOB) return fmt::format("{} is a BLOB, not a number", name);
   if (type != SQLITE_INTEGER && type != SQLITE_FLOAT) {
     return fmt::format("{} {} is not a number", name, shown(text));
   }
@@ -83,8 +90,10 @@ std::optional<std::string> amount_problem(int type, double value, std::string_vi
   return magnitude_problem(value, name);
 }
 
-std::string bad_date(const char* name, bool is_null, std::string_view text) {
-  return fmt::format("{} {} is not a valid date (YYYY-MM-DD)", name, shown_or_null(is_null, text));
+std::string bad_date(const char* name, int type, std::string_view text) {
+  if (type == SQLITE_BLOB) return fmt::format("{} is a BLOB, not a date (YYYY-MM-DD)", name);
+  return fmt::format("{} {} is not a valid date (YYYY-MM-DD)", name,
+                     shown_or_null(type == SQLITE_NULL, text));
 }
 
 std::string before_in_service(const char* name, const review::AssetRecord& asset) {
@@ -100,9 +109,9 @@ std::optional<std::string> magnitude_problem(double amount, const char* name) {
   return fmt::format("{} {} is larger in magnitude than {:g}", name, amount, kMaxAmount);
 }
 
-std::uint32_t AcceptedAssets::find(std::string_view id, bool is_null, std::string& reason) const {
-  if (is_null || id.empty()) {
-    reason = "asset_id is missing";
+std::uint32_t AcceptedAssets::find(std::string_view id, int type, std::string& reason) const {
+  if (auto problem = id_problem(type, id)) {
+    reason = std::move(*problem);
     return fleet::AssetIndex::npos;
   }
   if (const auto found = index.find(id); found != fleet::AssetIndex::npos) return found;

@@ -37,6 +37,10 @@ std::string shown(std::string_view s);
 // "NULL" for a NULL value, else shown(text).
 std::string shown_or_null(bool is_null, std::string_view text);
 
+// What is wrong with an asset_id of storage class `type`, or nullopt: missing (NULL or empty), or
+// a BLOB (which may hold a NUL or bytes that are no text).
+std::optional<std::string> id_problem(int type, std::string_view id);
+
 // An amount beyond kMaxAmount, or nullopt.
 std::optional<std::string> magnitude_problem(double amount, const char* name);
 
@@ -46,8 +50,10 @@ std::optional<std::string> magnitude_problem(double amount, const char* name);
 std::optional<std::string> amount_problem(int type, double value, std::string_view text,
                                           const char* name);
 
-// "<name> <value> is not a valid date (YYYY-MM-DD)".
-std::string bad_date(const char* name, bool is_null, std::string_view text);
+// "<name> <value> is not a valid date (YYYY-MM-DD)", or "<name> is a BLOB, not a date ..." for a
+// value stored as a BLOB; `type` is its SQLite storage class. A BLOB is refused alike in every
+// column: never read as text that may look valid.
+std::string bad_date(const char* name, int type, std::string_view text);
 
 // A row of the asset's dated before it went into service, or after it retired.
 std::string before_in_service(const char* name, const review::AssetRecord& asset);
@@ -69,8 +75,8 @@ struct AcceptedAssets {
   std::unordered_set<std::string, IdHash, std::equal_to<>> rejected_ids;
 
   // The accepted asset an event or valuation names, or AssetIndex::npos with the rejection reason
-  // in `reason` (fleet_reader.h rules 2 and 3).
-  std::uint32_t find(std::string_view id, bool is_null, std::string& reason) const;
+  // in `reason` (fleet_reader.h rules 2 and 3); `type` is the id's SQLite storage class.
+  std::uint32_t find(std::string_view id, int type, std::string& reason) const;
 };
 
 }  // namespace tenure::db
