@@ -10,6 +10,7 @@
 #include <cmath>
 #include <map>
 #include <memory>
+#include <optional>
 #include <string>
 
 #include "cli/commands.h"
@@ -22,7 +23,7 @@ namespace {
 struct DemoCommandOptions {
   std::string db;
   demo::Options generator;
-  std::string as_of;
+  std::optional<std::string> as_of;  // given, even empty, or not
   bool force = false;
   bool no_bad_rows = false;
   CLI::Option* events_given = nullptr;
@@ -60,9 +61,9 @@ db::DemoWrite write(db::Connection& db, const DemoCommandOptions& o) {
 }
 
 void run_demo(DemoCommandOptions o, const Console& console) {
-  if (!o.as_of.empty()) {
-    const auto as_of = parse_iso_date(o.as_of);
-    if (!as_of) throw InputError("--as-of", "'" + o.as_of + "' is not a valid date (YYYY-MM-DD)");
+  if (o.as_of) {  // given, even empty
+    const auto as_of = parse_iso_date(*o.as_of);
+    if (!as_of) throw InputError("--as-of", "'" + *o.as_of + "' is not a valid date (YYYY-MM-DD)");
     o.generator.as_of = *as_of;
   }
   if (o.events_given->count() == 0) {

@@ -26,8 +26,8 @@ namespace {
 
 struct ReviewCommandOptions {
   std::string db;
-  std::string policy_file;
-  std::string as_of;
+  std::optional<std::string> policy_file;  // given, even empty, or not
+  std::optional<std::string> as_of;
   std::optional<std::string> scenario;
   std::string format = "table";
   bool quiet = false;
@@ -100,8 +100,14 @@ std::string what_if_note(const app::RunSummary& s) {
 
 void run(const ReviewCommandOptions& o, const Console& console) {
   app::ReviewOptions options;
-  if (!o.policy_file.empty()) options.policy_json = read_input_file(o.policy_file, console.in);
-  if (!o.as_of.empty()) options.as_of = parse_as_of(o.as_of);
+  if (o.policy_file) {
+    if (o.policy_file->empty()) {
+      throw InputError("--policy", "must not be empty: give a policy file, - for standard input, "
+                                   "or leave it out for the policy stored in the database");
+    }
+    options.policy_json = read_input_file(*o.policy_file, console.in);
+  }
+  if (o.as_of) options.as_of = parse_as_of(*o.as_of);  // '' is not a date either
   if (o.scenario) require_scenario_name(*o.scenario, "--scenario");
   options.scenario = o.scenario;
   const bool show_progress = !o.quiet && ::isatty(STDERR_FILENO);

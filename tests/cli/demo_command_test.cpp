@@ -25,6 +25,9 @@ TEST(DemoCommand, CountsOutOfRangeNameTheirOption) {
   EXPECT_EQ(assets.exit_code, 2);
   EXPECT_EQ(assets.err, "tenure demo: --assets: must be a whole number from 1 to 10000000\n");
   EXPECT_FALSE(std::filesystem::exists(db));
+  const testing::Run empty = run_tenure({"demo", "--db", db, "--as-of", ""});
+  EXPECT_EQ(empty.exit_code, 2);
+  EXPECT_EQ(empty.err, "tenure demo: --as-of: '' is not a valid date (YYYY-MM-DD)\n");
 }
 
 }  // namespace

@@ -56,6 +56,17 @@ TEST_F(ReviewCommand, BadAsOfDateIsExitTwo) {
   EXPECT_EQ(r.err, "tenure review: --as-of: '2026-02-30' is not a valid date (YYYY-MM-DD)\n");
 }
 
+TEST_F(ReviewCommand, EmptyOptionValuesAreRefusedNotTakenForTheDefault) {
+  const cli::testing::Run as_of = run_tenure({"review", "--db", db, "--as-of", ""});
+  EXPECT_EQ(as_of.exit_code, 2);
+  EXPECT_EQ(as_of.err, "tenure review: --as-of: '' is not a valid date (YYYY-MM-DD)\n");
+  const cli::testing::Run policy = run_tenure({"review", "--db", db, "--policy", ""});
+  EXPECT_EQ(policy.exit_code, 2);
+  EXPECT_EQ(policy.err,
+            "tenure review: --policy: must not be empty: give a policy file, - for standard "
+            "input, or leave it out for the policy stored in the database\n");
+}
+
 TEST_F(ReviewCommand, MissingDatabaseFileIsExitTwo) {
   const cli::testing::Run r = run_tenure({"review", "--db", dir.path("nowhere.db")});
   EXPECT_EQ(r.exit_code, 2);
