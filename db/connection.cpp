@@ -29,7 +29,17 @@ Connection Connection::open_existing(const std::string& path, const std::string&
   if (!path.starts_with("file:") && !std::filesystem::exists(path)) {
     throw InputError(option, "no database file '" + path + "'");
   }
-  return open(path);
+  Connection db = open(path);
+  // SQLite reads the header only at the first statement: a file that is not a database is bad
+  // input, said here with its name, not a failure later.
+  sqlite3_stmt* probe = nullptr;
+  int rc = sqlite3_prepare_v2(db.handle_, "SELECT count(*) FROM sqlite_schema", -1, &probe, nullptr);
+  if (rc == SQLITE_OK) rc = sqlite3_step(probe);
+  sqlite3_finalize(probe);
+  if (rc == SQLITE_NOTADB) {
+    throw InputError(option, "'" + path + "' is not a SQLite database");
+  }
+  return db;
 }
 
 Connection Connection::borrow(sqlite3* handle) { return Connection(handle, false); }

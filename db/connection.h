@@ -24,8 +24,9 @@ class Connection {
   // Opens (creating if asked) a database file with a busy timeout, so that a host holding the
   // write lock for a while makes tenure wait rather than fail.
   static Connection open(const std::string& path, bool create = false);
-  // Opens a database that must exist (a path or a file: URI). A missing file is bad input:
-  // InputError naming `option` ("--db: no database file 'x'"), so nothing is created by a typo.
+  // Opens a database that must exist (a path or a file: URI). A missing file, or one that is not a
+  // SQLite database, is bad input: InputError naming `option` ("--db: no database file 'x'",
+  // "--db: 'x' is not a SQLite database"), so nothing is created by a typo.
   static Connection open_existing(const std::string& path, const std::string& option);
   // Wraps a connection the caller owns (the extension's, a host's); not closed here.
   static Connection borrow(sqlite3* handle);

@@ -111,7 +111,7 @@ void CostRows::finish(ReadReport& report, std::int64_t rows_before) && {
   report.rows_after_as_of += rows_after_as_of_;
   for (Rejected& r : rejected_) {
     report.rejected.push_back(
-        {source_, fmt::format("row {} {}", rows_before + r.row, r.keys), std::move(r.reason)});
+        {source_, fmt::format("position {} {}", rows_before + r.row, r.keys), std::move(r.reason)});
   }
 }
 

@@ -75,13 +75,24 @@ class Reader {
       : db_(db), policy_(policy), data_(data), split_min_rows_(split_min_rows) {}
 
   ReadReport run() {
-    read_assets();
-    read_costs();
-    read_valuations();
+    reading(policy_.sources.assets, [this] { read_assets(); });
+    reading(policy_.sources.costs, [this] { read_costs(); });
+    reading(policy_.sources.valuations, [this] { read_valuations(); });
     return std::move(report_);
   }
 
  private:
+  // Runs `read`; a failure of the database while it runs (a view that raises an error mid-scan,
+  // say) names the relation: "relation 'v_costs': malformed JSON".
+  template <class Read>
+  static void reading(const std::string& relation, Read&& read) {
+    try {
+      read();
+    } catch (const RuntimeFailure& e) {
+      throw RuntimeFailure(fmt::format("relation '{}': {}", relation, e.what()));
+    }
+  }
+
   void reject(const std::string& source, std::string row_ref, std::string reason) {
     report_.rejected.push_back({source, std::move(row_ref), std::move(reason)});
   }
@@ -97,9 +108,7 @@ class Reader {
       ++report_.rows_read;
       const auto type = storage_classes<5>(q);
       const std::string_view id = q.text(0);
-      const std::string ref = type[0] == SQLITE_NULL
-                                  ? fmt::format("row {}", row)
-                                  : fmt::format("row {} (asset_id {})", row, shown(id));
+      const std::string ref = asset_row_ref(row, type[0] == SQLITE_NULL, id);
       const auto fail = [&](std::string reason) {
         if (type[0] != SQLITE_NULL && !id.empty()) accepted_.rejected_ids.emplace(id);
         reject(source, ref, std::move(reason));
@@ -187,7 +196,7 @@ class Reader {
       ++report_.rows_read;
       const auto type = storage_classes<3>(q);
       const auto ref = [&] {
-        return fmt::format("row {} (asset_id {}, valued_on {})", row, shown_value(q, 0, type[0]),
+        return fmt::format("position {} (asset_id {}, valued_on {})", row, shown_value(q, 0, type[0]),
                            shown_value(q, 1, type[1]));
       };
       const std::uint32_t asset = accepted_.find(q.text(0), type[0], reason);

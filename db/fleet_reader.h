@@ -8,8 +8,8 @@
 //   ReadReport report = read_fleet(db, policy, data);
 //   report.rejected[0].reason;   // "occurred_on '2023-02-29' is not a valid date (YYYY-MM-DD)"
 //
-// Row references name the row's position in the scan ("row 17") and its key values, since views
-// have no rowid.
+// Row references name the row's position in the scan ("position 17", not a rowid: views have
+// none) and its key values.
 //
 // Rules (cited by the code):
 //   (1) asset: asset_id present, valid UTF-8, at most 256 bytes, not seen before (a duplicate is

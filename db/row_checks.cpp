@@ -69,6 +69,15 @@ std::string shown(std::string_view s) {
   return out + "'";
 }
 
+std::string asset_ref_keys(std::string_view id) {
+  return fmt::format(" (asset_id {})", shown(id));
+}
+
+std::string asset_row_ref(std::int64_t position, bool id_is_null, std::string_view id) {
+  const std::string at = fmt::format("position {}", position);
+  return id_is_null ? at : at + asset_ref_keys(id);
+}
+
 std::string shown_or_null(bool is_null, std::string_view text) {
   return is_null ? std::string("NULL") : shown(text);
 }

@@ -34,6 +34,11 @@ bool valid_utf8(std::string_view s);
 // and bytes that are not UTF-8 shown as '?', so that the stored text is one line of valid UTF-8.
 std::string shown(std::string_view s);
 
+// The row reference of an asset row at scan `position`: "position 17 (asset_id 'PU-0017')", or
+// "position 17" when its id is NULL; and the part after the position, which names the id.
+std::string asset_row_ref(std::int64_t position, bool id_is_null, std::string_view id);
+std::string asset_ref_keys(std::string_view id);
+
 // "NULL" for a NULL value, else shown(text).
 std::string shown_or_null(bool is_null, std::string_view text);
 

@@ -130,10 +130,10 @@ std::int64_t count_newly_due(Connection& db, std::int64_t run_id) {
 std::optional<results::RejectedRow> read_rejected_asset(Connection& db, std::int64_t run_id,
                                                         std::string_view assets_source,
                                                         std::string_view asset_id) {
-  // The reader's row_ref of an asset row is "row N (asset_id <shown id>)".
-  const std::string ends = fmt::format(" (asset_id {})", shown(asset_id));
+  // The reader's row_ref of an asset row (row_checks.h asset_row_ref).
+  const std::string ends = asset_ref_keys(asset_id);
   Statement q(db, select_sql(results::rejected_table()) +
-                      " WHERE run_id = ?1 AND source = ?2 AND row_ref GLOB 'row [0-9]*' AND "
+                      " WHERE run_id = ?1 AND source = ?2 AND row_ref GLOB 'position [0-9]*' AND "
                       "substr(row_ref, -length(?3)) = ?3 ORDER BY rowid LIMIT 1");
   q.bind(1, run_id);
   q.bind(2, assets_source);

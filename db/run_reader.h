@@ -80,7 +80,7 @@ std::optional<results::InputAsset> read_input_row(Connection& db, const review::
 // reader shows it, db/row_checks.h); nullopt when there is none.
 //
 //   sqlite> SELECT reason FROM tenure_rejected WHERE run_id = 1 AND source = 'asset'
-//      ...>   AND row_ref = 'row 322 (asset_id ''VAN-00322'')';
+//      ...>   AND row_ref = 'position 322 (asset_id ''VAN-00322'')';
 //   in_service_on '2021/11/30' is not a valid date (YYYY-MM-DD)
 std::optional<results::RejectedRow> read_rejected_asset(Connection& db, std::int64_t run_id,
                                                         std::string_view assets_source,

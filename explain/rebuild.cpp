@@ -50,9 +50,12 @@ review::ClassModel rebuild_class_model(const results::ClassRow& stored,
   const fleet::ValueCurve value_curve{stored.value_model, stored.value_start,
                                       stored.value_decline,
                                       static_cast<std::size_t>(stored.valuations_used)};
-  return review::make_class_model(stored.asset_class, class_policy->second,
+  review::ClassModel model = review::make_class_model(stored.asset_class, class_policy->second,
                                   static_cast<std::size_t>(stored.assets), std::move(cost_curve),
                                   value_curve, policy.rates, policy.esl_band);
+  // Without a cost curve the run's own words say why (there may be years of no usable cost).
+  if (!model.cost_curve && stored.note) model.note = *stored.note;
+  return model;
 }
 
 review::DefenderInputs rebuild_defender_inputs(const results::AssetRow& stored,

@@ -156,7 +156,7 @@ struct CashFlowRow {
 // A row of tenure_rejected.
 struct RejectedRow {
   std::string source;   // the input relation, as named by the policy's sources
-  std::string row_ref;  // "row 17 (asset_id 'PU-0017')"
+  std::string row_ref;  // "position 17 (asset_id 'PU-0017')"
   std::string reason;
 };
 

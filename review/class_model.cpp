@@ -95,7 +95,7 @@ ClassModel make_class_model(const std::string& asset_class, const ClassPolicy& p
                    {}};
   if (!model.cost_curve) {
     model.note = fmt::format("no complete year of cost history for class '{}', so its costs "
-                             "cannot be estimated",
+                             "cannot be estimated until it has one",
                              asset_class);
     return model;
   }
@@ -142,6 +142,12 @@ ClassModel build_class_model(const std::string& asset_class, const ClassPolicy& 
   ClassModel model = make_class_model(
       asset_class, policy, members.size(), fit_cost_curve(cost_pool, policy.cost_model),
       fleet::fit_value_curve(value_pool, policy.annual_decline), rates, band_width);
+  if (!model.cost_curve && cost_pool.asset_years() > 0) {
+    // Years there are, but a geometric curve has no logarithm of a cost of zero or less.
+    model.note = fmt::format("none of the {} complete asset-years of class '{}' has a cost above "
+                             "zero, which its cost_model geometric needs (or use linear or auto)",
+                             cost_pool.asset_years(), asset_class);
+  }
   if (model.challenger) model.spread = spread_of(model, data, members, rates);
   return model;
 }

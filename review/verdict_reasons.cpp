@@ -51,7 +51,7 @@ std::string verdict_reason(VerdictTest test, const VerdictFigures& f, Years age,
 
 std::string cannot_weigh_reason(std::string_view why) {
   return fmt::format(
-      "Review: {}; tenure cannot weigh this asset until the class has a complete year of costs.",
+      "Review: {}; tenure cannot weigh this asset until then.",
       why);
 }
 

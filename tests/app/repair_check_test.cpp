@@ -206,7 +206,7 @@ TEST_P(RepairCheckRun, AssetsTheRunDidNotWeighSayWhy) {
             "2026-06-30: the run did not weigh it");
   EXPECT_EQ(why_not("PS-001", review::NotWeighed::cannot_weigh),
             "asset 'PS-001' cannot be weighed: no complete year of cost history for class "
-            "'pump-spare', so its costs cannot be estimated");
+            "'pump-spare', so its costs cannot be estimated until it has one");
   {
     db::Connection db = file.open();
     db.exec("INSERT INTO asset VALUES ('PF-LATE', 'pump-fixture', '2020-03-15', 18000, NULL)");

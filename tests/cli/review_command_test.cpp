@@ -67,6 +67,14 @@ TEST_F(ReviewCommand, EmptyOptionValuesAreRefusedNotTakenForTheDefault) {
             "input, or leave it out for the policy stored in the database\n");
 }
 
+TEST_F(ReviewCommand, AFileThatIsNotADatabaseIsExitTwoNamingIt) {
+  // An empty file is an empty database (exit 2: no policy); one of other bytes is not one.
+  const std::string junk = dir.write("junk.db", std::string(4096, 'x'));
+  const cli::testing::Run r = run_tenure({"review", "--db", junk});
+  EXPECT_EQ(r.exit_code, 2);
+  EXPECT_EQ(r.err, "tenure review: --db: '" + junk + "' is not a SQLite database\n");
+}
+
 TEST_F(ReviewCommand, MissingDatabaseFileIsExitTwo) {
   const cli::testing::Run r = run_tenure({"review", "--db", dir.path("nowhere.db")});
   EXPECT_EQ(r.exit_code, 2);

@@ -25,7 +25,7 @@ struct BadRow {
 const BadRow kBadRows[] = {
     {"asset", "INSERT INTO asset VALUES ('PF-001', 'pump-fixture', '2020-01-15', 9000, NULL)",
      "asset_id 'PF-001'", "duplicate asset_id 'PF-001': the first row with it is used"},
-    {"asset", "INSERT INTO asset VALUES (NULL, 'pump-fixture', '2020-01-15', 9000, NULL)", "row ",
+    {"asset", "INSERT INTO asset VALUES (NULL, 'pump-fixture', '2020-01-15', 9000, NULL)", "position ",
      "asset_id is missing"},
     {"asset", "INSERT INTO asset VALUES ('X-CLASS', 'crane', '2020-01-15', 9000, NULL)",
      "asset_id 'X-CLASS'", "asset_class 'crane' is not among the policy's classes"},
@@ -46,7 +46,7 @@ const BadRow kBadRows[] = {
     {"asset", "INSERT INTO asset VALUES ('X-BADRET', 'pump-fixture', '2020-01-15', 9000, 'soon')",
      "asset_id 'X-BADRET'", "retired_on 'soon' is not a valid date (YYYY-MM-DD)"},
     {"asset", "INSERT INTO asset VALUES (CAST(X'FF41' AS TEXT), 'pump-fixture', '2020-01-15', 9000, NULL)",
-     "row ", "asset_id is not valid UTF-8"},
+     "position ", "asset_id is not valid UTF-8"},
     {"cost_event", "INSERT INTO cost_event VALUES ('PF-002', '2023-13-01', 10, 'repair')",
      "asset_id 'PF-002', occurred_on '2023-13-01'", "occurred_on '2023-13-01' is not a valid date (YYYY-MM-DD)"},
     {"cost_event", "INSERT INTO cost_event VALUES ('PF-002', '2023-02-29', 10, 'repair')",

@@ -155,7 +155,7 @@ TEST_F(DemoFleet, HalvesStoreExactlyWhatOnePassStores) {
                        "'cost_event' AND CAST(substr(row_ref, 5) AS INTEGER) <= " +
                            std::to_string(events / 2)),
             0);
-  EXPECT_EQ(scalar(db, "SELECT count(*) FROM tenure_rejected WHERE run_id = 2 AND row_ref LIKE 'row " +
+  EXPECT_EQ(scalar(db, "SELECT count(*) FROM tenure_rejected WHERE run_id = 2 AND row_ref LIKE 'position " +
                            std::to_string(events) + " (%'"),
             1);
   EXPECT_EQ(one_pass.rows_read, halves.rows_read);

@@ -156,7 +156,7 @@ TEST(DemoWriter, TheReviewRejectsExactlyTheInjectedBadRows) {
                     " AND row_ref LIKE ?3");
     found.bind(1, run.run_id);
     found.bind(2, bad.relation);
-    found.bind(3, "row " + std::to_string(bad.row_number) + " %");
+    found.bind(3, "position " + std::to_string(bad.row_number) + " %");
     ASSERT_TRUE(found.step());
     EXPECT_EQ(found.integer(0), 1);
   }

@@ -12,6 +12,7 @@
 #include <fmt/format.h>
 
 #include "core/errors.h"
+#include "app/explain_run.h"
 #include "app/review_run.h"
 #include "db/row_checks.h"
 #include "db_test_support.h"
@@ -525,6 +526,23 @@ TEST_F(InputCatalogue, ClassWithNoCostHistory) {
 }
 
 // Complete years without any event are years that cost nothing: a flat zero curve, finite.
+TEST_F(InputCatalogue, GeometricClassWithYearsButNoCostAboveZeroSaysSo) {
+  // Issue: it said "no complete year of cost history" though the class has complete years.
+  std::string policy = catalogue_policy();
+  const std::string automatic = "\"cost_model\": \"auto\"";
+  policy.replace(policy.rfind(automatic), automatic.size(), "\"cost_model\": \"geometric\"");
+  Connection db = file.open();
+  db.exec("INSERT INTO asset VALUES ('HO-IDLE', 'hoist-fixture', '2018-01-10', 9000, NULL);"
+          "INSERT INTO cost_event VALUES ('HO-IDLE', '2019-03-01', 0, 'inspection');");
+  const app::RunSummary s = app::run_review(db, {policy, parse_iso_date(fixtures::kAsOf), {}, {}});
+  EXPECT_EQ(text_of(db, "SELECT reason FROM tenure_latest WHERE asset_id = 'HO-IDLE'"),
+            "Review: none of the 8 complete asset-years of class 'hoist-fixture' has a cost above "
+            "zero, which its cost_model geometric needs (or use linear or auto); tenure cannot "
+            "weigh this asset until then.");
+  // explain reads the same words back from the stored class row.
+  EXPECT_TRUE(app::explain_stored_asset(db, "HO-IDLE", s.run_id).reproduced());
+}
+
 TEST_F(InputCatalogue, ClassWithYearsButNoEvents) {
   Connection db = file.open();
   db.exec("INSERT INTO asset VALUES ('HO-IDLE', 'hoist-fixture', '2018-01-10', 9000, NULL);");

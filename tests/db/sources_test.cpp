@@ -93,6 +93,28 @@ TEST(Sources, ColumnNamesMatchWhateverTheirCaseAsInSqlite) {
   EXPECT_EQ(latest_rows(a), latest_rows(b));
 }
 
+TEST(Sources, AViewFailingMidScanIsNamed) {
+  // A site's view whose expression fails on one row: the failure names the relation.
+  TempDatabase file;
+  Connection db = file.open();
+  fixtures::create_input_tables(db.handle());
+  fixtures::add_noiseless_fleet(db.handle());
+  db.exec("CREATE TABLE raw_cost(asset_id TEXT, occurred_on TEXT, detail TEXT);"
+          "INSERT INTO raw_cost SELECT asset_id, occurred_on, json_object('a', amount) "
+          "FROM cost_event;"
+          "INSERT INTO raw_cost VALUES ('PF-001', '2025-01-01', 'not json');"
+          "CREATE VIEW v_cost AS SELECT asset_id, occurred_on, json_extract(detail, '$.a') "
+          "AS amount FROM raw_cost;");
+  std::string policy = fixtures::noiseless_policy();
+  policy.insert(policy.find("\"classes\""), R"("sources": {"costs": "v_cost"},)");
+  try {
+    app::run_review(db, {policy, parse_iso_date(fixtures::kAsOf), {}, {}});
+    FAIL() << "expected a RuntimeFailure";
+  } catch (const RuntimeFailure& e) {
+    EXPECT_EQ(std::string(e.what()), "cannot read the inputs: relation 'v_cost': malformed JSON");
+  }
+}
+
 TEST(Sources, NamesThatAreNotPlainIdentifiersAreRefused) {
   TempDatabase file;
   Connection db = file.open();

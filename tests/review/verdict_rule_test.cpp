@@ -65,13 +65,15 @@ INSTANTIATE_TEST_SUITE_P(
         Row{"brand new", 22, 22, 0, 1, Verdict::keep, VerdictTest::none_held}));
 
 TEST(CannotWeigh, IsUnderReviewSayingWhy) {
-  const VerdictFinding f = cannot_weigh("no complete year of cost history for class 'x'");
+  const VerdictFinding f = cannot_weigh(
+      "no complete year of cost history for class 'x', so its costs cannot be estimated until it "
+      "has one");
   EXPECT_EQ(f.verdict, Verdict::review);
   EXPECT_EQ(f.decided_by, VerdictTest::cannot_weigh);
   EXPECT_FALSE(f.figures);
   EXPECT_EQ(f.reason,
-            "Review: no complete year of cost history for class 'x'; tenure cannot weigh this "
-            "asset until the class has a complete year of costs.");
+            "Review: no complete year of cost history for class 'x', so its costs cannot be "
+            "estimated until it has one; tenure cannot weigh this asset until then.");
 }
 
 TEST(FiguresOf, TakesTheDecisionsFiguresOnItsBasis) {
