@@ -50,7 +50,8 @@ void add_report_command(CLI::App& app, const Console& console) {
   CLI::App* command = app.add_subcommand(
       "report", "A static HTML page with charts of a stored run, for people who sign off a plan");
   command->add_option("--db", o->db, "the maintenance database (SQLite file)")->required();
-  command->add_option("--out", o->out, "the HTML file to write; - writes the page to standard output")
+  command
+      ->add_option("--out", o->out, "the HTML file to write; - writes the page to standard output")
       ->required();
   command->add_option("--run", o->run, "the run to report; default: the latest baseline run")
       ->type_name("N");

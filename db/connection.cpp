@@ -33,7 +33,8 @@ Connection Connection::open_existing(const std::string& path, const std::string&
   // SQLite reads the header only at the first statement: a file that is not a database is bad
   // input, said here with its name, not a failure later.
   sqlite3_stmt* probe = nullptr;
-  int rc = sqlite3_prepare_v2(db.handle_, "SELECT count(*) FROM sqlite_schema", -1, &probe, nullptr);
+  int rc =
+      sqlite3_prepare_v2(db.handle_, "SELECT count(*) FROM sqlite_schema", -1, &probe, nullptr);
   if (rc == SQLITE_OK) rc = sqlite3_step(probe);
   sqlite3_finalize(probe);
   if (rc == SQLITE_NOTADB) {

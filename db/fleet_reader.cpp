@@ -196,8 +196,8 @@ class Reader {
       ++report_.rows_read;
       const auto type = storage_classes<3>(q);
       const auto ref = [&] {
-        return fmt::format("position {} (asset_id {}, valued_on {})", row, shown_value(q, 0, type[0]),
-                           shown_value(q, 1, type[1]));
+        return fmt::format("position {} (asset_id {}, valued_on {})", row,
+                           shown_value(q, 0, type[0]), shown_value(q, 1, type[1]));
       };
       const std::uint32_t asset = accepted_.find(q.text(0), type[0], reason);
       if (asset == fleet::AssetIndex::npos) { reject(source, ref(), reason); continue; }

@@ -56,18 +56,6 @@ void add_unweighed_rows(db::Connection& db) {
       "INSERT INTO asset VALUES ('PS-001', 'pump-spare', '2026-01-15', 9000, NULL);");
 }
 
-// The class challenger as a case file, from the fixture's formulas.
-std::string challenger_case(double tax) {
-  std::vector<double> costs, values;
-  for (int k = 1; k <= 12; ++k) {
-    costs.push_back(fixtures::noiseless_cost(k));
-    values.push_back(20000 * fixtures::kValueStart * std::pow(1 - fixtures::kValueDecline, k));
-  }
-  return fmt::format(R"({{"marr": 0.10, "income_tax_rate": {}, "challenger": {{
-      "first_cost": 20000, "operating_costs": [{:.17g}], "market_values": [{:.17g}],
-      "depreciation": {{"method": "straight_line", "life_years": 8, "salvage": 0}}}}}})",
-                     tax, fmt::join(costs, ","), fmt::join(values, ","));
-}
 
 // The asset as the defender of a case file: its costs on the curve at ages a+1.. (credibility
 // factor 1: its own costs are exactly on the curve), values on the value curve.
@@ -78,7 +66,7 @@ replacement::CaseResult case_of(double tax, int age, double first_cost, double v
     values.push_back(first_cost * fixtures::kValueStart *
                      std::pow(1 - fixtures::kValueDecline, age + k));
   }
-  std::string text = challenger_case(tax);
+  std::string text = fixtures::noiseless_challenger_case(tax);
   text.pop_back();
   text += fmt::format(
       R"(, "defender": {{"first_cost": {:.17g}, "age_years": {}, "market_value_now": {:.17g},

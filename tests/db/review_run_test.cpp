@@ -59,23 +59,12 @@ TEST_P(NoiselessFleet, FittedCurvesAreExact) {
   EXPECT_NEAR(scalar(db, "SELECT value_decline FROM tenure_class_latest"), fixtures::kValueDecline, kExact);
 }
 
-// The class challenger as a case file: the same series `tenure case` would read.
-std::string challenger_case(double tax) {
-  std::vector<double> costs, values;
-  for (int k = 1; k <= 12; ++k) {
-    costs.push_back(fixtures::noiseless_cost(k));
-    values.push_back(20000 * fixtures::kValueStart * std::pow(1 - fixtures::kValueDecline, k));
-  }
-  return fmt::format(R"({{"marr": 0.10, "income_tax_rate": {}, "challenger": {{
-      "first_cost": 20000, "operating_costs": [{:.17g}], "market_values": [{:.17g}],
-      "depreciation": {{"method": "straight_line", "life_years": 8, "salvage": 0}}}}}})",
-                     tax, fmt::join(costs, ","), fmt::join(values, ","));
-}
 
 TEST_P(NoiselessFleet, ClassEconomicLifeEqualsTheCaseAnalysis) {
   review();
   Connection db = file.open();
-  const auto result = replacement::analyse(formats::read_case(challenger_case(GetParam())));
+  const auto result = replacement::analyse(
+      formats::read_case(fixtures::noiseless_challenger_case(GetParam())));
   const auto& before = result.challenger.before_tax.curve;
   EXPECT_EQ(scalar(db, "SELECT esl_years_before_tax FROM tenure_class_latest"), before.best_years);
   EXPECT_NEAR(scalar(db, "SELECT euac_before_tax FROM tenure_class_latest"), before.best_euac,
@@ -94,7 +83,8 @@ TEST_P(NoiselessFleet, ClassEconomicLifeEqualsTheCaseAnalysis) {
 TEST_P(NoiselessFleet, ClassLifeBandAndPercentilesFollowTheCaseAnalysis) {
   review();
   Connection db = file.open();
-  const auto result = replacement::analyse(formats::read_case(challenger_case(GetParam())));
+  const auto result = replacement::analyse(
+      formats::read_case(fixtures::noiseless_challenger_case(GetParam())));
   const auto& curve = result.challenger.on(result.basis).curve;
   int low = 0, high = 0;
   for (std::size_t n = 0; n < curve.euac.size(); ++n) {
@@ -114,7 +104,8 @@ TEST_P(NoiselessFleet, VerdictsEqualTheDefenderCaseAnalysis) {
   review();
   Connection db = file.open();
   const double tax = GetParam();
-  const auto challenger = replacement::analyse(formats::read_case(challenger_case(tax)));
+  const auto challenger =
+      replacement::analyse(formats::read_case(fixtures::noiseless_challenger_case(tax)));
   const auto basis = challenger.basis;
   const double c_star = challenger.challenger.on(basis).curve.best_euac;
   const int esl = challenger.challenger.on(basis).curve.best_years;
@@ -137,7 +128,7 @@ TEST_P(NoiselessFleet, VerdictsEqualTheDefenderCaseAnalysis) {
             "operating_costs": [{:.17g}], "market_values": [{:.17g}],
             "depreciation": {{"method": "straight_line", "life_years": 8, "salvage": 0}}}}}})",
         first_cost, age, q.real(3), fmt::join(costs, ","), fmt::join(values, ","));
-    std::string text = challenger_case(tax);
+    std::string text = fixtures::noiseless_challenger_case(tax);
     text.pop_back();
     const auto r = replacement::analyse(formats::read_case(text + defender));
     const auto& d = *r.decision;
