@@ -9,6 +9,7 @@
 #include "core/checks.h"
 #include "formats/depreciation_json.h"
 #include "formats/json_path.h"
+#include "formats/json_text.h"
 
 namespace tenure::formats {
 namespace {
@@ -80,15 +81,38 @@ nlohmann::json depreciation_object(const FlatDepreciation& flat, const Depreciat
   return object;
 }
 
+bool is_object_text(std::string_view method) {
+  const std::size_t first = method.find_first_not_of(" \t\r\n");
+  return first != std::string_view::npos && method[first] == '{';
+}
+
+// Rule (6): the method is a depreciation object, and only basis and disposal_year stand beside
+// it. The object's errors keep their JSON paths ("$.bonus").
+nlohmann::json given_object(const FlatDepreciation& flat, const MisfitRefusals& refusals) {
+  for (const MethodParameter& parameter : kMethodParameters) {
+    if (parameter.value(flat)) {
+      throw InputError(std::string(parameter.name),
+                       "must not be given when the method is a depreciation object (put it in "
+                       "the object)");
+    }
+  }
+  nlohmann::json object = parse_json_text(flat.method);
+  if (!object.is_object()) throw InputError("$", "must be a JSON object");
+  if (!flat.basis) throw refusals.missing("basis", "given as an object");
+  return object;
+}
+
 }  // namespace
 
 FlatSchedule flat_schedule(const FlatDepreciation& flat, const MisfitRefusals& refusals) {
+  const bool as_object = is_object_text(flat.method);
   const DepreciationForm* form = find_depreciation_form(flat.method);
-  if (form == nullptr) {  // rule (1)
+  if (form == nullptr && !as_object) {  // rule (1)
     throw InputError("method", fmt::format("unknown method '{}' (expected one of {})", flat.method,
                                            depreciation_method_names()));
   }
-  const nlohmann::json object = depreciation_object(flat, *form, refusals);
+  const nlohmann::json object =
+      as_object ? given_object(flat, refusals) : depreciation_object(flat, *form, refusals);
   try {
     const depreciation::Spec spec = read_depreciation(JsonObject(object, "$"));  // rule (4)
     // The bound of every amount tenure reads (core/checks.h): 1e308 would print infinities.
@@ -99,7 +123,10 @@ FlatSchedule flat_schedule(const FlatDepreciation& flat, const MisfitRefusals& r
     if (flat.disposal_year) disposal_year = whole_years(*flat.disposal_year, "disposal_year", 1);
     return {spec, std::move(schedule), disposal_year};
   } catch (const InputError& error) {
-    throw at_parameter(error);
+    // The flat parameters beside an object keep their names; the object's errors are at its
+    // JSON paths, the method's own ("recovery_years") under "$".
+    const bool flat_beside = error.where() == "basis" || error.where() == "disposal_year";
+    throw as_object && !flat_beside ? under_path(error, "$") : at_parameter(error);
   }
 }
 

@@ -24,6 +24,11 @@
 //       or 20), rate > 0, salvage >= 0 and not above the basis, basis > 0, and basis and salvage
 //       at most 1e15 in magnitude, the bound of every amount (core/checks.h).
 //   (5) disposal_year, when given, is a whole year >= 1.
+//   (6) A method that is JSON text starting with '{' is a whole depreciation object, as a case
+//       file writes it ({"method": "macrs", "recovery_years": 5}): every key a case file
+//       accepts, read by read_depreciation. Beside it only basis and disposal_year may be
+//       given; any other parameter "must not be given when the method is a depreciation object
+//       (put it in the object)". The object's errors are at its JSON paths ("$.recovery_years").
 // Rules (2) and (3) are checked parameter by parameter in the order of FlatDepreciation.
 #pragma once
 

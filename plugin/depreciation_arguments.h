@@ -14,6 +14,10 @@
 //                          more, 0 never to switch
 //   dispose_in_year        tenure_depreciation only: sold at the end of this year (whole, >= 1)
 // An argument a method does not use must be NULL or left out ("... is not used by method macrs").
+// The method may instead be a whole depreciation object as JSON text, as a case file writes it
+// ('{"method": "macrs", "recovery_years": 5}'), for every key a case file accepts; then only
+// basis (and dispose_in_year) may stand beside it, and its errors name JSON paths
+// ("tenure_depreciation: $.recovery_years: must be one of 3, 5, 7, 10, 15, 20").
 //
 //   const Signature s{"tenure_book_value", {"method", "basis", ...}, kDepreciationAliases};
 //   depreciation::Schedule schedule = schedule_from(Arguments(s, argc, argv)).schedule;

@@ -21,6 +21,8 @@
 //     FROM asset AS a, tenure_depreciation('macrs', a.first_cost, 0, 7) AS d;  -- a join
 //   SELECT sum(depreciation) FROM tenure_depreciation('sum_of_years_digits', 15000, 0, 5);
 //     -- 15000.0
+//   SELECT * FROM tenure_depreciation('{"method": "macrs", "recovery_years": 5}', 10000);
+//     -- the method as a case file's depreciation object: the same six rows as the first call
 //
 // Columns: year (INTEGER, 1..), depreciation (REAL, the year's deduction), book_value (REAL, at
 // the year's end), then the hidden inputs method, basis, salvage, life, rate,

@@ -111,5 +111,44 @@ TEST(FlatDepreciation, EveryRuleNamesTheFlatParameter) {
   for (const auto& [flat, expected] : cases) EXPECT_EQ(error_of(flat), expected);
 }
 
+TEST(FlatDepreciation, AMethodMayBeAWholeDepreciationObject) {
+  // Rule (6): the object a case file writes, read as a case file's.
+  const FlatSchedule s = flat_schedule(
+      {.method = R"( {"method": "macrs", "recovery_years": 5})", .basis = 10000, .disposal_year = 3},
+      kRefusals);
+  EXPECT_EQ(std::get<MacrsSpec>(s.spec).recovery_years, 5);
+  EXPECT_EQ(s.disposal_year, 3);
+  // IRS Publication 946, Table A-1, 5-year property, year 2: 32.00%.
+  EXPECT_NEAR(s.schedule.deduction(2), 3200, kTol);
+}
+
+TEST(FlatDepreciation, AnObjectsErrorsAreAtItsJsonPaths) {
+  const std::vector<std::pair<FlatDepreciation, std::string>> cases = {
+      {{.method = R"({"method": "macrs", "recovery_years": 4})", .basis = 1000},
+       "$.recovery_years|must be one of 3, 5, 7, 10, 15, 20"},
+      {{.method = R"({"method": "straight_line", "life_years": 5})", .basis = 1000},
+       "$.salvage|required number is missing"},
+      {{.method = R"({"method": "straight_line", "life_years": 5, "salvage": 2000})",
+        .basis = 1000},
+       "$.salvage|must not exceed the basis"},
+      {{.method = R"({"method": "none", "life_years": 5})", .basis = 1000},
+       "$.life_years|unknown key (expected one of method)"},
+      {{.method = "[1]", .basis = 1000},
+       "method|unknown method '[1]' (expected one of straight_line, declining_balance, "
+       "sum_of_years_digits, macrs, none)"},
+      {{.method = "{", .basis = 1000},
+       "$|invalid JSON at line 1, column 2: syntax error while parsing object key - unexpected "
+       "end of input; expected string literal"},
+      // Only basis and disposal_year stand beside an object; basis keeps its name.
+      {{.method = R"({"method": "none"})", .basis = 1000, .life = 5},
+       "life|must not be given when the method is a depreciation object (put it in the "
+       "object)"},
+      {{.method = R"({"method": "none"})", .basis = -1}, "basis|must be > 0"},
+      {{.method = R"({"method": "none"})", .basis = 10, .disposal_year = 0},
+       "disposal_year|must be >= 1"},
+  };
+  for (const auto& [flat, expected] : cases) EXPECT_EQ(error_of(flat), expected);
+}
+
 }  // namespace
 }  // namespace tenure::formats

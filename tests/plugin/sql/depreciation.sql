@@ -32,6 +32,11 @@ SELECT (SELECT group_concat(year || ':' || depreciation || '/' || book_value, ',
 SELECT (SELECT depreciation FROM tenure_depreciation('macrs', 10000, 0, 5, NULL, NULL, 6) WHERE year = 6) = 576;
 SELECT (SELECT depreciation FROM tenure_depreciation('straight_line', 12000, 2000, 5, NULL, NULL, 3) WHERE year = 3) = 2000;
 SELECT (SELECT count(*) FROM tenure_depreciation('straight_line', 12000, 2000, 5, NULL, NULL, 3)) = 3;
+-- The method as a whole depreciation object, as a case file writes it; only basis and
+-- dispose_in_year beside it.
+SELECT (SELECT group_concat(depreciation, ',') FROM tenure_depreciation('{"method": "macrs", "recovery_years": 5}', 10000)) = '2000.0,3200.0,1920.0,1152.0,1152.0,576.0';
+SELECT (SELECT group_concat(depreciation, ',') FROM tenure_depreciation('{"method": "straight_line", "life_years": 5, "salvage": 2000}', 12000, NULL, NULL, NULL, NULL, 2)) = '2000.0,2000.0';
+SELECT tenure_book_value('{"method": "sum_of_years_digits", "life_years": 5, "salvage": 0}', 15000, NULL, NULL, 2) = 6000;
 
 -- Hidden columns: the inputs read back as given, NULL when left out; constraints on them in a
 -- WHERE clause are the same as arguments.
@@ -83,6 +88,11 @@ SELECT * FROM tenure_depreciation('straight_line', 10000, 0, 5, NULL, NULL, 0); 
 SELECT * FROM tenure_depreciation('none', 10000, 0, 5); -- error: tenure_depreciation: 4th argument (life) is not used by method none
 SELECT * FROM tenure_depreciation('linear', 10000, 0, 5); -- error: tenure_depreciation: unknown method 'linear' (expected one of straight_line, declining_balance, sum_of_years_digits, macrs, none)
 SELECT * FROM tenure_depreciation(NULL, 10000, 0, 5); -- error: tenure_depreciation: 1st argument (method) must be text
+SELECT * FROM tenure_depreciation('{"method": "macrs", "recovery_years": 4}', 10000); -- error: tenure_depreciation: $.recovery_years: must be one of 3, 5, 7, 10, 15, 20
+SELECT * FROM tenure_depreciation('{"method": "macrs"}', 10000); -- error: tenure_depreciation: $.recovery_years: required whole number is missing
+SELECT * FROM tenure_depreciation('{"method": "macrs", "recovery_years": 5}', 10000, NULL, 5); -- error: tenure_depreciation: 4th argument (life) must not be given when the method is a depreciation object (put it in the object)
+SELECT * FROM tenure_depreciation('{"method": "macrs", "recovery_years": 5}'); -- error: tenure_depreciation: 2nd argument (basis) is missing
+SELECT * FROM tenure_depreciation('{"method": ', 10000); -- error: tenure_depreciation: $: invalid JSON at line 1, column 12: syntax error while parsing value - unexpected end of input; expected '[', '{', or a literal
 SELECT tenure_book_value('straight_line', 10000, 0, 5, -1); -- error: tenure_book_value: 5th argument (year) must be >= 0
 SELECT tenure_book_value('straight_line', 10000, 0, 5, NULL); -- error: tenure_book_value: 5th argument (year) must be a number
 SELECT tenure_book_value('declining_balance', 10000, 0, 5, 2); -- error: tenure_book_value: 6th argument (rate) is missing
