@@ -5,6 +5,7 @@
 #include <fmt/format.h>
 
 #include <chrono>
+#include <ctime>
 #include <optional>
 
 #include "app/sha256.h"
@@ -84,11 +85,11 @@ results::RunRow run_row(const Date& as_of, std::optional<std::string> scenario,
 
 }  // namespace
 
-Date today_utc() {
-  const auto days = std::chrono::floor<std::chrono::days>(std::chrono::system_clock::now());
-  const std::chrono::year_month_day ymd(days);
-  return *Date::from_ymd(static_cast<int>(ymd.year()), static_cast<int>(unsigned(ymd.month())),
-                         static_cast<int>(unsigned(ymd.day())));
+Date today_local() {
+  const std::time_t now = std::time(nullptr);
+  std::tm local{};
+  if (::localtime_r(&now, &local) == nullptr) throw RuntimeFailure("cannot read the local date");
+  return *Date::from_ymd(local.tm_year + 1900, local.tm_mon + 1, local.tm_mday);
 }
 
 RunSummary run_review(db::Connection& db, const ReviewOptions& options) {
@@ -96,7 +97,7 @@ RunSummary run_review(db::Connection& db, const ReviewOptions& options) {
   std::string started_at = now_utc_iso();
   std::string policy_text = policy_text_of(db, options);
   const review::Policy policy = formats::read_policy(policy_text);
-  const Date as_of = options.as_of.value_or(today_utc());
+  const Date as_of = options.as_of.value_or(today_local());
 
   review::FleetData data(as_of, policy.cost_escalation);
   db::ReadReport report;

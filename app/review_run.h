@@ -32,7 +32,7 @@ namespace tenure::app {
 
 struct ReviewOptions {
   std::optional<std::string> policy_json;  // nullopt: the latest stored policy
-  std::optional<Date> as_of;               // nullopt: today (UTC)
+  std::optional<Date> as_of;               // nullopt: today (local date)
   review::Progress progress;               // optional progress callback
   std::function<void()> before_commit;     // optional hook, called just before COMMIT
   // A cost-event table whose rowids span at least this many is read in two halves at once
@@ -68,7 +68,8 @@ struct RunSummary {
 // or written; RuntimeFailure when the database cannot be read or written.
 RunSummary run_review(db::Connection& db, const ReviewOptions& options);
 
-// Today's date in UTC.
-Date today_utc();
+// Today's date where the machine is (its TZ): a site east of UTC running at 02:15 reviews as of
+// its own today, not UTC's yesterday.
+Date today_local();
 
 }  // namespace tenure::app

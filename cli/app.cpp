@@ -12,7 +12,7 @@ void add_commands(CLI::App& app, const Console& console) {
   app.description(
       "tenure: replacement analysis for equipment. Economic service life, defender against\n"
       "challenger, after-tax cash flows with depreciation, and when to replace.");
-  app.set_version_flag("--version", std::string("tenure ") + kVersion);
+  app.set_version_flag("-V,--version", std::string("tenure ") + kVersion);
   app.require_subcommand(1);
   app.footer(
       "Examples:\n"
@@ -29,6 +29,7 @@ void add_commands(CLI::App& app, const Console& console) {
   add_report_command(app, console);
   add_due_command(app, console);
   add_repair_command(app, console);
+  add_help_command(app, console);
 }
 
 }  // namespace tenure::cli

@@ -44,6 +44,8 @@ void add_explain_command(CLI::App& app, const Console& console);
 void add_report_command(CLI::App& app, const Console& console);
 // tenure due --db PATH [--newly] [--class C] [--format table|csv|json] [--run N]
 void add_due_command(CLI::App& app, const Console& console);
+// tenure help [COMMAND...]: the help of tenure or of a command
+void add_help_command(CLI::App& app, const Console& console);
 // tenure repair --db PATH ASSET --estimate R [--run N] [--format text|json]
 void add_repair_command(CLI::App& app, const Console& console);
 

@@ -138,7 +138,7 @@ void add_review_command(CLI::App& app, const Console& console) {
   command->add_option("--db", o->db, "the maintenance database (SQLite file)")->required();
   command->add_option("--policy", o->policy_file,
                       "policy file (JSON); default: the latest policy stored in the database");
-  command->add_option("--as-of", o->as_of, "review as of this date (YYYY-MM-DD); default: today (UTC)");
+  command->add_option("--as-of", o->as_of, "review as of this date (YYYY-MM-DD); default: today (the local date)");
   command
       ->add_option("--scenario", o->scenario,
                    "store a what-if run under this name (1 to 64 letters, digits, '-', '_', "

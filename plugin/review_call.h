@@ -24,7 +24,7 @@
 namespace tenure::plugin {
 
 // Runs the review and returns the new run's id. policy_json: nullopt for the latest policy stored
-// in the database; as_of: 'YYYY-MM-DD', nullopt for today (UTC); scenario: nullopt for a
+// in the database; as_of: 'YYYY-MM-DD', nullopt for today (the local date); scenario: nullopt for a
 // baseline run, else the what-if run's name (app/review_run.h). Throws InputError naming "as_of"
 // for a bad date, InputError("", ...) inside a writing statement, and what run_review throws
 // (InputError for a bad policy, a missing relation or a bad scenario name, naming "scenario";

@@ -4,9 +4,10 @@
 // the new run's id; the views tenure_latest, tenure_due, tenure_newly_due and
 // tenure_class_latest then show it when it is the latest baseline run (by as_of, then run_id).
 // policy_json NULL uses the latest policy stored in the database (tenure_policy, as `tenure
-// policy set` stores it); as_of is 'YYYY-MM-DD', today (UTC) when left out or NULL. scenario,
-// when given and not NULL, makes it a what-if run of that name (`tenure review --scenario`):
-// the nightly views ignore it and tenure_scenario_diff compares it with the latest baseline run.
+// policy set` stores it); as_of is 'YYYY-MM-DD', today (the local date) when left out or NULL.
+// scenario, when given and not NULL, makes it a what-if run of that name (`tenure review
+// --scenario`): the nightly views ignore it and tenure_scenario_diff compares it with the latest
+// baseline run.
 //
 // Usage (on the invented demo fleet of `tenure demo --db demo.db`, which stores its policy):
 //   SELECT tenure_review(NULL, '2026-11-30');                        -- 1, the new run's id

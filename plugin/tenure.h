@@ -67,7 +67,7 @@ TENURE_API const char* tenure_library_version(void);
  * and stores the new run's id in *run_id. Results go into the tenure_* tables and views of that
  * database, as with `tenure review`.
  *   policy_json  the policy's JSON text; NULL uses the latest policy stored in the database
- *   as_of        'YYYY-MM-DD'; NULL means today (UTC)
+ *   as_of        'YYYY-MM-DD'; NULL means today (the local date)
  * In autocommit mode the run commits itself; inside a transaction the caller holds, it joins
  * that transaction (a savepoint), so the caller's ROLLBACK removes the run. Must not be called
  * while a statement that writes is running on `db` (TENURE_BAD_INPUT). */

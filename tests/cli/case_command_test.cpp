@@ -135,7 +135,7 @@ TEST(CaseCommand, UsageErrorsExitWithTwoAndOneLine) {
     EXPECT_EQ(run.err.rfind("tenure", 0), 0u) << run.err;
     EXPECT_EQ(run.err.find('\n'), run.err.size() - 1) << "one line: " << run.err;
   }
-  EXPECT_EQ(run_tenure({"case"}).err, "tenure case: FILE is required (see 'tenure case --help')\n");
+  EXPECT_EQ(run_tenure({"case"}).err, "tenure case: FILE: is required (see 'tenure case --help')\n");
 }
 
 TEST(CaseCommand, HelpAndVersionExitWithZero) {

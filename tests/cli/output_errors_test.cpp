@@ -32,7 +32,7 @@ TEST(OutputErrors, EveryPrintingCommandFailsOnAFullDisk) {
       "tenure schedule");
   expect_write_failure(
       run_tenure({"review", "--db", db, "--as-of", "2026-11-30"}, "", "", kFull), "tenure review");
-  expect_write_failure(run_tenure({"policy", "show", "--db", db}, "", "", kFull), "tenure policy");
+  expect_write_failure(run_tenure({"policy", "show", "--db", db}, "", "", kFull), "tenure policy show");
   expect_write_failure(run_tenure({"explain", "--db", db, "VAN-00154"}, "", "", kFull),
                        "tenure explain");
   expect_write_failure(run_tenure({"--help"}, "", "", kFull), "tenure");

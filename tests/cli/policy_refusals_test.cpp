@@ -38,11 +38,11 @@ TEST_F(PolicyRefusals, SqlInSourcesIsExitTwoEverywhere) {
   const std::string policy = dir.write("bad.json", kSqlInSources);
   const cli::testing::Run check = run_tenure({"policy", "check", policy});
   EXPECT_EQ(check.exit_code, 2);
-  EXPECT_EQ(check.err, std::string("tenure policy: ") + kSourceMessage);
+  EXPECT_EQ(check.err, std::string("tenure policy check: ") + kSourceMessage);
 
   const cli::testing::Run set = run_tenure({"policy", "set", "--db", db, policy});
   EXPECT_EQ(set.exit_code, 2);
-  EXPECT_EQ(set.err, std::string("tenure policy: ") + kSourceMessage);
+  EXPECT_EQ(set.err, std::string("tenure policy set: ") + kSourceMessage);
 
   const cli::testing::Run review = run_tenure({"review", "--db", db, "--policy", policy, "--as-of", "2026-06-30"});
   EXPECT_EQ(review.exit_code, 2);
@@ -69,7 +69,7 @@ TEST_F(PolicyRefusals, UnknownKeyAndOutOfRangeRateNameTheirPaths) {
     "classes": {}})");
   const cli::testing::Run b = run_tenure({"policy", "check", rate});
   EXPECT_EQ(b.exit_code, 2);
-  EXPECT_EQ(b.err, "tenure policy: $.marr: must be <= 1 (100% a year)\n");
+  EXPECT_EQ(b.err, "tenure policy check: $.marr: must be <= 1 (100% a year)\n");
 }
 
 }  // namespace

@@ -107,7 +107,7 @@ TEST(ScheduleCommand, ParametersAreRequiredAndCheckedByOption) {
 
 TEST(ScheduleCommand, UsageErrorsExitWithTwo) {
   expect_bad({"schedule", "--method", "none"},
-             "tenure schedule: --basis is required (see 'tenure schedule --help')");
+             "tenure schedule: --basis: is required (see 'tenure schedule --help')");
   const testing::Run both =
       run_tenure({"schedule", "--method", "declining_balance", "--life", "5", "--rate", "2",
                   "--salvage", "0", "--switch", "--no-switch", "--basis", "1000"});
