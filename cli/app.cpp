@@ -16,7 +16,7 @@ void add_commands(CLI::App& app, const Console& console) {
   app.require_subcommand(1);
   app.footer(
       "Examples:\n"
-      "  tenure case fixtures/cases/delivery_van.json --format table\n"
+      "  tenure case fixtures/cases/delivery_van.json\n"
       "  tenure schedule --method macrs --life 5 --basis 52000\n"
       "  tenure demo --db demo.db && tenure review --db demo.db\n"
       "Run 'tenure COMMAND --help' for a command's options.");

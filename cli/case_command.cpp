@@ -11,12 +11,12 @@ namespace {
 
 struct CaseOptions {
   std::string file;
-  std::string format = "json";
+  std::string format = "text";
 };
 
 void run_case(const CaseOptions& options, const Console& console) {
   const std::string text = read_input_file(options.file, console.in);
-  if (options.format == "table") {
+  if (options.format == "text") {
     console.out << app::case_result_tables(text);
   } else {
     console.out << app::case_result_json(text).dump(2) << '\n';
@@ -31,9 +31,8 @@ void add_case_command(CLI::App& app, const Console& console) {
       "case", "Analyse one replacement case file: economic life, keep or replace, and when");
   command->add_option("FILE", options->file, "the case file (JSON); '-' reads standard input")
       ->required();
-  command->add_option("--format", options->format, "json (the default) or table, for people")
-      ->type_name("FORMAT")
-      ->check(CLI::IsMember({"json", "table"}));
+  add_format_option(*command, options->format, {"text", "json"},
+                    "tables for people (the default) or the whole result as JSON");
   command->footer(
       "The case file (JSON; // and /* */ comments allowed) gives marr and income_tax_rate,\n"
       "optionally after_tax_marr and capital_gains_tax_rate, a challenger (first_cost,\n"
@@ -44,8 +43,8 @@ void add_case_command(CLI::App& app, const Console& console) {
       "Errors name the JSON path and the rule, e.g. '$.challenger.first_cost: must be > 0'.\n"
       "\n"
       "Examples:\n"
-      "  tenure case fixtures/cases/delivery_van.json --format table\n"
-      "  tenure case - < my_case.json > result.json");
+      "  tenure case fixtures/cases/delivery_van.json\n"
+      "  tenure case - --format json < my_case.json > result.json");
   command->callback([options, console] { run_case(*options, console); });
 }
 

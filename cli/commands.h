@@ -10,6 +10,8 @@
 
 #include <istream>
 #include <ostream>
+#include <string>
+#include <vector>
 
 #include <CLI/CLI.hpp>
 
@@ -22,6 +24,16 @@ struct Console {
   std::ostream& out;
   std::ostream& err;
 };
+
+// --db PATH, required, or the TENURE_DB environment variable when it is not given; one
+// spelling for every command that reads a database (not `demo`, which writes one).
+CLI::Option* add_db_option(CLI::App& command, std::string& db, const std::string& description);
+
+// --format FORMAT, one of `formats` ("text" for people, "json", ...), with the same words and
+// help in every command: "text, json: <description>".
+CLI::Option* add_format_option(CLI::App& command, std::string& format,
+                               const std::vector<std::string>& formats,
+                               const std::string& description);
 
 // The top-level app: description, --version, the footer, every command below.
 void add_commands(CLI::App& app, const Console& console);

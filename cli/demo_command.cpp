@@ -101,6 +101,7 @@ void add_demo_command(CLI::App& app, const Console& console) {
   auto o = std::make_shared<DemoCommandOptions>();
   CLI::App* command = app.add_subcommand(
       "demo", "Build a demo database: the invented fleet of Larkmoor Water, with its policy");
+  // Never $TENURE_DB: a demo --force there would replace the real database.
   command->add_option("--db", o->db, "database file to write (created when missing)")
       ->type_name("PATH")
       ->required();

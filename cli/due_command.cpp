@@ -1,4 +1,4 @@
-// `tenure due --db PATH [--newly] [--class C] [--format table|csv|json] [--run N]`: the morning
+// `tenure due --db PATH [--newly] [--class C] [--format text|csv|json] [--run N]`: the morning
 // list of a stored run without SQL: its assets whose verdict is review or replace, the most
 // urgent first, with what is at stake for each and its reason (app/due_list.h reads it,
 // formats/due_list_output.h writes it).
@@ -20,7 +20,7 @@ struct DueOptions {
   std::string db;
   bool newly = false;
   std::optional<std::string> asset_class;
-  std::string format = "table";
+  std::string format = "text";
   std::optional<std::int64_t> run;
 };
 
@@ -46,13 +46,12 @@ void add_due_command(CLI::App& app, const Console& console) {
   auto o = std::make_shared<DueOptions>();
   CLI::App* command = app.add_subcommand(
       "due", "The due list of a stored run: the assets to review or replace, most urgent first");
-  command->add_option("--db", o->db, "the maintenance database (SQLite file)")->required();
+  add_db_option(*command, o->db, "the maintenance database (SQLite file)");
   command->add_flag("--newly", o->newly, "only the assets that were not due in the run before");
   command->add_option("--class", o->asset_class, "only the assets of this class")
       ->type_name("CLASS");
-  command->add_option("--format", o->format, "table (the default), csv or json")
-      ->type_name("FORMAT")
-      ->check(CLI::IsMember({"table", "csv", "json"}));
+  add_format_option(*command, o->format, {"text", "csv", "json"},
+                    "a table for people (the default), CSV for a spreadsheet, or JSON");
   command->add_option("--run", o->run, "the run to read; default: the latest successful run")
       ->type_name("N");
   command->footer(

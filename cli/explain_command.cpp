@@ -46,13 +46,12 @@ void add_explain_command(CLI::App& app, const Console& console) {
   auto o = std::make_shared<ExplainOptions>();
   CLI::App* command = app.add_subcommand(
       "explain", "One asset's whole computation from a stored run, as tables a person can audit");
-  command->add_option("--db", o->db, "the maintenance database (SQLite file)")->required();
+  add_db_option(*command, o->db, "the maintenance database (SQLite file)");
   command->add_option("ASSET", o->asset, "the asset_id to explain")->required();
   command->add_option("--run", o->run, "the run to read; default: the latest baseline run")
       ->type_name("N");
-  command->add_option("--format", o->format, "text (the default) or json")
-      ->type_name("FORMAT")
-      ->check(CLI::IsMember({"text", "json"}));
+  add_format_option(*command, o->format, {"text", "json"},
+                    "tables for people (the default) or JSON");
   command->footer(
       "Shows the inputs (age, first cost, book and market value now and where they came from),\n"
       "the policy rates and whether money is real or nominal, the class's fitted curves, the\n"

@@ -61,14 +61,14 @@ void add_policy_command(CLI::App& app, const Console& console) {
   auto set_options = std::make_shared<PolicyOptions>();
   CLI::App* set_command = command->add_subcommand(
       "set", "Check a policy file and store it; the nightly review uses the latest stored");
-  set_command->add_option("--db", set_options->db, "the maintenance database (SQLite file)")->required();
+  add_db_option(*set_command, set_options->db, "the maintenance database (SQLite file)");
   set_command->add_option("FILE", set_options->file, "the policy file (JSON); '-' reads standard input")
       ->required();
   set_command->callback([set_options, console] { set(*set_options, console); });
 
   auto show_options = std::make_shared<PolicyOptions>();
   CLI::App* show_command = command->add_subcommand("show", "Print the latest stored policy");
-  show_command->add_option("--db", show_options->db, "the maintenance database (SQLite file)")->required();
+  add_db_option(*show_command, show_options->db, "the maintenance database (SQLite file)");
   show_command->callback([show_options, console] { show(*show_options, console); });
 }
 

@@ -39,16 +39,15 @@ void add_repair_command(CLI::App& app, const Console& console) {
   auto o = std::make_shared<RepairOptions>();
   CLI::App* command = app.add_subcommand(
       "repair", "Repair or replace one asset, for a repair estimate, from a stored run");
-  command->add_option("--db", o->db, "the maintenance database (SQLite file)")->required();
+  add_db_option(*command, o->db, "the maintenance database (SQLite file)");
   command->add_option("ASSET", o->asset, "the asset_id to weigh the repair for")->required();
   command->add_option("--estimate", o->estimate, "the repair's cost, paid now (>= 0)")
       ->type_name("AMOUNT")
       ->required();
   command->add_option("--run", o->run, "the run to read; default: the latest successful run")
       ->type_name("N");
-  command->add_option("--format", o->format, "text (the default) or json")
-      ->type_name("FORMAT")
-      ->check(CLI::IsMember({"text", "json"}));
+  add_format_option(*command, o->format, {"text", "json"},
+                    "tables for people (the default) or JSON");
   command->footer(
       "Repair when the estimate is within the asset's repair limit: the largest one-time repair,\n"
       "paid now with the costs ahead unchanged, still worth making rather than replacing now\n"

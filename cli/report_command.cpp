@@ -49,7 +49,7 @@ void add_report_command(CLI::App& app, const Console& console) {
   auto o = std::make_shared<ReportOptions>();
   CLI::App* command = app.add_subcommand(
       "report", "A static HTML page with charts of a stored run, for people who sign off a plan");
-  command->add_option("--db", o->db, "the maintenance database (SQLite file)")->required();
+  add_db_option(*command, o->db, "the maintenance database (SQLite file)");
   command
       ->add_option("--out", o->out, "the HTML file to write; - writes the page to standard output")
       ->required();

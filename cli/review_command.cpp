@@ -1,11 +1,17 @@
 // `tenure review`: the nightly run on a maintenance database (SPEC 6 to 8). Reads the stored or
 // given policy, reviews every asset, writes the results in one transaction, and ends with a
-// summary: a table for people, or JSON with --format json. With --scenario NAME the run is a
-// what-if run: stored under that name, left out of the nightly views (db/schema.h), its "newly
-// due" compared with the latest baseline run.
+// summary: a table for people on a terminal (--format text), one line for a log when the output
+// is not a terminal or with -q (--format line), or JSON (--format json). With --scenario NAME
+// the run is a what-if run: stored under that name, left out of the nightly views
+// (db/schema.h), its "newly due" compared with the latest baseline run.
+//
+//   $ tenure review --db fleet.db -q >> /var/log/tenure.log
+//   2026-12-02T02:15:07+0100 tenure review: run 7 as of 2026-12-02, 313 assets reviewed (keep
+//   250, review 40, replace 23), due 63, newly due 5, 12 of 40210 rows rejected, 3.21 s
 #include <unistd.h>
 
 #include <cstdio>
+#include <ctime>
 #include <memory>
 #include <optional>
 #include <string>
@@ -29,8 +35,8 @@ struct ReviewCommandOptions {
   std::optional<std::string> policy_file;  // given, even empty, or not
   std::optional<std::string> as_of;
   std::optional<std::string> scenario;
-  std::string format = "table";
-  bool quiet = false;
+  std::string format_given;  // empty: text on a terminal, else line
+  bool quiet = false;                 // the line, and no progress display
 };
 
 Date parse_as_of(const std::string& text) {
@@ -81,6 +87,26 @@ nlohmann::json summary_json(const app::RunSummary& s) {
                        {"commit", s.commit_seconds}}}};
 }
 
+// Now, on the machine's clock and in its time zone: "2026-12-02T02:15:07+0100".
+std::string local_timestamp() {
+  const std::time_t now = std::time(nullptr);
+  std::tm local{};
+  ::localtime_r(&now, &local);
+  char text[32];
+  return std::string(text, std::strftime(text, sizeof text, "%Y-%m-%dT%H:%M:%S%z", &local));
+}
+
+std::string summary_line(const app::RunSummary& s) {
+  const std::string run = s.scenario ? fmt::format("what-if run {} '{}'", s.run_id, *s.scenario)
+                                     : fmt::format("run {}", s.run_id);
+  return fmt::format(
+      "{} tenure review: {} as of {}, {} assets reviewed (keep {}, review {}, replace {}), due {}, "
+      "newly due {}, {} of {} rows rejected, {:.2f} s\n",
+      local_timestamp(), run, s.as_of, s.assets_reviewed, s.keep, s.review, s.replace, s.due,
+      s.newly_due, s.rows_rejected, s.rows_read,
+      s.read_seconds + s.analyse_write_seconds + s.commit_seconds);
+}
+
 std::string nightly_note(const app::RunSummary& s) {
   return fmt::format(
       "See the views tenure_latest, tenure_due, tenure_newly_due and tenure_class_latest;\n"
@@ -119,8 +145,17 @@ void run(const ReviewCommandOptions& o, const Console& console) {
   }
   db::Connection db = db::Connection::open_existing(o.db, "--db");
   const app::RunSummary summary = app::run_review(db, options);
-  if (o.format == "json") {
+  const std::string format =
+      o.quiet                   ? "line"
+      : !o.format_given.empty() ? o.format_given
+      : ::isatty(STDOUT_FILENO) ? "text"
+                                : "line";
+  if (format == "json") {
     console.out << summary_json(summary).dump(2) << '\n';
+    return;
+  }
+  if (format == "line") {
+    console.out << summary_line(summary);
     return;
   }
   console.out << "tenure review: done\n"
@@ -135,7 +170,7 @@ void add_review_command(CLI::App& app, const Console& console) {
   auto o = std::make_shared<ReviewCommandOptions>();
   CLI::App* command = app.add_subcommand(
       "review", "The nightly review: every asset's economic life, verdict and reason, into SQL views");
-  command->add_option("--db", o->db, "the maintenance database (SQLite file)")->required();
+  add_db_option(*command, o->db, "the maintenance database (SQLite file)");
   command->add_option("--policy", o->policy_file,
                       "policy file (JSON); default: the latest policy stored in the database");
   command->add_option("--as-of", o->as_of, "review as of this date (YYYY-MM-DD); default: today (the local date)");
@@ -144,10 +179,12 @@ void add_review_command(CLI::App& app, const Console& console) {
                    "store a what-if run under this name (1 to 64 letters, digits, '-', '_', "
                    "'.'); the nightly views ignore it")
       ->type_name("NAME");
-  command->add_option("--format", o->format, "table (the default) or json, for the summary")
-      ->type_name("FORMAT")
-      ->check(CLI::IsMember({"table", "json"}));
-  command->add_flag("--quiet", o->quiet, "no progress display");
+  CLI::Option* format = add_format_option(
+      *command, o->format_given, {"text", "line", "json"},
+      "the summary as a table for people, one line for a log, or JSON; default: text on a "
+      "terminal, else line");
+  command->add_flag("-q,--quiet", o->quiet, "the one-line summary and no progress display")
+      ->excludes(format);
   command->footer(
       "Reads the relations named by the policy's sources (default asset, cost_event,\n"
       "asset_valuation) without writing them, fits each class's cost and value curves, weighs\n"
@@ -161,6 +198,7 @@ void add_review_command(CLI::App& app, const Console& console) {
       "\n"
       "Examples:\n"
       "  tenure review --db fleet.db\n"
+      "  tenure review --db fleet.db -q >> /var/log/tenure-review.log   # from cron\n"
       "  tenure review --db fleet.db --policy policy.json --as-of 2026-11-30 --format json\n"
       "  tenure review --db fleet.db --policy dearer-vans.json --scenario price-up");
   command->callback([o, console] { run(*o, console); });

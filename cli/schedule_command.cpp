@@ -43,7 +43,7 @@ struct ScheduleOptions {
   bool switch_to_straight_line = false;  // --switch
   bool no_switch = false;                // --no-switch; excludes --switch
   double dispose_in_year = 0;
-  std::string format = "table";
+  std::string format = "text";
   // Which of the optional parameters were given.
   CLI::Option* salvage_given = nullptr;
   CLI::Option* life_given = nullptr;
@@ -126,9 +126,8 @@ void add_schedule_command(CLI::App& app, const Console& console) {
   o->dispose_given =
       command->add_option("--dispose-in-year", o->dispose_in_year, "sold at the end of this year")
           ->type_name("YEAR");
-  command->add_option("--format", o->format, "table (the default) or json")
-      ->type_name("FORMAT")
-      ->check(CLI::IsMember({"table", "json"}));
+  add_format_option(*command, o->format, {"text", "json"},
+                    "a table for people (the default) or JSON");
   command->footer(
       "Each method needs exactly its own parameters; there are no silent defaults:\n"
       "  straight_line, sum_of_years_digits   --life, --salvage\n"

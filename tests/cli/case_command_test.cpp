@@ -28,7 +28,7 @@ nlohmann::json expected_json(const std::string& file) {
 
 TEST(CaseCommand, FixturesPrintTheLibrarysJson) {
   for (const char* name : kFixtures) {
-    const testing::Run run = run_tenure({"case", fixture(name)});
+    const testing::Run run = run_tenure({"case", fixture(name), "--format", "json"});
     EXPECT_EQ(run.exit_code, 0) << name << ": " << run.err;
     EXPECT_EQ(run.err, "") << name;
     const nlohmann::json printed = nlohmann::json::parse(run.out);
@@ -56,8 +56,8 @@ TEST(CaseCommand, FixturesCoverTheirDesign) {
   }
 }
 
-TEST(CaseCommand, TableFormatEndsWithTheCaution) {
-  const testing::Run run = run_tenure({"case", fixture("delivery_van.json"), "--format", "table"});
+TEST(CaseCommand, TextIsTheDefaultAndEndsWithTheCaution) {
+  const testing::Run run = run_tenure({"case", fixture("delivery_van.json")});
   EXPECT_EQ(run.exit_code, 0) << run.err;
   const replacement::Case input = formats::read_case(testing::slurp(fixture("delivery_van.json")));
   EXPECT_EQ(run.out, formats::case_result_to_table(input, replacement::analyse(input)));
@@ -66,7 +66,7 @@ TEST(CaseCommand, TableFormatEndsWithTheCaution) {
 
 TEST(CaseCommand, DashReadsStandardInput) {
   const testing::Run run =
-      run_tenure({"case", "-"}, testing::slurp(fixture("forklift_before_tax.json")));
+      run_tenure({"case", "-", "--format", "json"}, testing::slurp(fixture("forklift_before_tax.json")));
   EXPECT_EQ(run.exit_code, 0) << run.err;
   EXPECT_EQ(nlohmann::json::parse(run.out), expected_json(fixture("forklift_before_tax.json")));
 }

@@ -150,7 +150,7 @@ TEST_F(DueCommand, RefusalsNameTheOptionWithExitTwo) {
   refused(run_tenure({"due", "--db", path, "--run", "9"}),
           "tenure due: --run: no successful run 9\n");
   refused(run_tenure({"due", "--db", path, "--format", "xml"}),
-          "tenure due: --format: must be one of table, csv, json, not 'xml' (see 'tenure due --help')\n");
+          "tenure due: --format: must be one of text, csv, json, not 'xml' (see 'tenure due --help')\n");
   const std::string missing = dir.path("missing.db");
   refused(run_tenure({"due", "--db", missing}),
           "tenure due: --db: no database file '" + missing + "'\n");

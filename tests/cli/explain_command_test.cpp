@@ -101,7 +101,7 @@ TEST_F(ExplainCommand, AgreesWithTenureCaseOnTheSameInputs) {
     const std::string file = dir.write(
         "case.json", case_from_formulas(in.at("age_years"), in.at("first_cost"),
                                         in.at("market_value_now")));
-    const testing::Run c = run_tenure({"case", file});
+    const testing::Run c = run_tenure({"case", file, "--format", "json"});
     ASSERT_EQ(c.exit_code, 0) << c.err;
     const nlohmann::json result = nlohmann::json::parse(c.out);
     for (const char* basis : {"before_tax", "after_tax"}) {
@@ -118,7 +118,8 @@ TEST_F(ExplainCommand, AgreesWithTenureCaseOnTheSameInputs) {
     EXPECT_EQ(doc.at("verdict").at("replace_after_years"),
               result.at("decision").at("replace_after_years"));
     // The case it prints itself gives `tenure case`'s figures to the last bit.
-    const testing::Run same = run_tenure({"case", dir.write("same.json", doc.at("equivalent_case").dump())});
+    const testing::Run same = run_tenure(
+        {"case", dir.write("same.json", doc.at("equivalent_case").dump()), "--format", "json"});
     ASSERT_EQ(same.exit_code, 0) << same.err;
     const nlohmann::json exact = nlohmann::json::parse(same.out);
     EXPECT_EQ(doc.at("defender").at("after_tax").at("euac"), exact.at("defender").at("after_tax").at("euac"));

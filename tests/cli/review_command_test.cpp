@@ -2,7 +2,9 @@
 // 1 failure, 2 bad input), the one-line error messages, the JSON summary, and the stored policy.
 #include <gtest/gtest.h>
 
+#include <cstdio>
 #include <filesystem>
+#include <regex>
 
 #include <nlohmann/json.hpp>
 
@@ -10,6 +12,17 @@
 
 namespace tenure::cli::testing {
 namespace {
+
+// The output of a shell command line.
+Run run_local_date(const std::string& command) {
+  std::string out;
+  if (FILE* pipe = ::popen(command.c_str(), "r")) {
+    char buffer[64];
+    while (std::fgets(buffer, sizeof buffer, pipe) != nullptr) out += buffer;
+    ::pclose(pipe);
+  }
+  return {0, out, ""};
+}
 
 class ReviewCommand : public ::testing::Test {
  protected:
@@ -36,11 +49,70 @@ TEST_F(ReviewCommand, ReviewsTheDemoFleetAndSummarisesAsJson) {
   EXPECT_EQ(summary.at("newly_due"), summary.at("due"));  // the first run: all due is new
 }
 
-TEST_F(ReviewCommand, TableSummaryEndsWithTheCaution) {
-  const cli::testing::Run r = run_tenure({"review", "--db", db, "--as-of", "2026-11-30"});
+TEST_F(ReviewCommand, TextSummaryEndsWithTheCaution) {
+  const cli::testing::Run r =
+      run_tenure({"review", "--db", db, "--as-of", "2026-11-30", "--format", "text"});
   ASSERT_EQ(r.exit_code, 0) << r.err;
   EXPECT_NE(r.out.find("newly due"), std::string::npos);
   EXPECT_NE(r.out.find("not tax, accounting or legal advice"), std::string::npos);
+}
+
+// Not a terminal (a cron job's log) or -q: one line per run, with a local timestamp, the run
+// and its counts; the same counts as the JSON summary of the next run.
+TEST_F(ReviewCommand, ALogGetsOneLinePerRun) {
+  const std::regex line(
+      R"(^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d[+-]\d{4} tenure review: run (\d+) as of 2026-11-30, )"
+      R"((\d+) assets reviewed \(keep (\d+), review (\d+), replace (\d+)\), due (\d+), )"
+      R"(newly due (\d+), (\d+) of (\d+) rows rejected, \d+\.\d\d s\n$)");
+  const cli::testing::Run piped = run_tenure({"review", "--db", db, "--as-of", "2026-11-30"});
+  const cli::testing::Run quiet = run_tenure({"review", "--db", db, "--as-of", "2026-11-30", "-q"});
+  const cli::testing::Run json =
+      run_tenure({"review", "--db", db, "--as-of", "2026-11-30", "--format", "json"});
+  ASSERT_EQ(quiet.exit_code, 0) << quiet.err;
+  std::smatch m;
+  ASSERT_TRUE(std::regex_match(piped.out, m, line)) << piped.out;
+  EXPECT_EQ(m[1], "1");
+  ASSERT_TRUE(std::regex_match(quiet.out, m, line)) << quiet.out;
+  EXPECT_EQ(m[1], "2");
+  const auto s = nlohmann::json::parse(json.out);
+  EXPECT_EQ(m[2], std::to_string(s.at("assets_reviewed").get<int>()));
+  EXPECT_EQ(m[3], std::to_string(s.at("keep").get<int>()));
+  EXPECT_EQ(m[6], std::to_string(s.at("due").get<int>()));
+  EXPECT_EQ(m[8], std::to_string(s.at("rows_rejected").get<int>()));
+  EXPECT_EQ(m[9], std::to_string(s.at("rows_read").get<int>()));
+  EXPECT_EQ(quiet.err, "");
+  const cli::testing::Run both =
+      run_tenure({"review", "--db", db, "-q", "--format", "json"});
+  EXPECT_EQ(both.exit_code, 2);
+  EXPECT_EQ(both.err,
+            "tenure review: --format: cannot be given with --quiet (see 'tenure review --help')\n");
+}
+
+// With no --as-of, the review is as of the local date: a site at UTC+14 is a day ahead of UTC
+// for ten hours of every day, and at UTC-12 a day behind for twelve.
+TEST_F(ReviewCommand, TodayIsTheLocalDate) {
+  for (const char* zone : {"EAST-14", "WEST+12"}) {  // POSIX TZ strings: no zone files needed
+    const cli::testing::Run r = run_tenure({"review", "--db", db, "--format", "json"}, "",
+                                           std::string("TZ=") + zone + "; export TZ; ");
+    ASSERT_EQ(r.exit_code, 0) << r.err;
+    const cli::testing::Run date =
+        run_local_date(std::string("TZ=") + zone + " date +%Y-%m-%d");
+    EXPECT_EQ(nlohmann::json::parse(r.out).at("as_of").get<std::string>() + "\n", date.out)
+        << zone;
+  }
+}
+
+// TENURE_DB stands in for --db; --db still wins.
+TEST_F(ReviewCommand, TheDatabaseMayComeFromTenureDb) {
+  const std::string env = std::string("TENURE_DB=") + testing::quoted(db) + "; export TENURE_DB; ";
+  const cli::testing::Run r = run_tenure({"due", "--format", "csv"}, "", env);
+  EXPECT_EQ(r.exit_code, 2);  // the demo database, which has no run yet
+  EXPECT_EQ(r.err, "tenure due: --db: no review run in this database (run 'tenure review' "
+                   "first)\n");
+  EXPECT_EQ(run_tenure({"due"}).err, "tenure due: --db: is required (see 'tenure due --help')\n");
+  const cli::testing::Run other =
+      run_tenure({"due", "--db", dir.path("missing.db")}, "", env);
+  EXPECT_NE(other.err.find("missing.db"), std::string::npos) << other.err;
 }
 
 TEST_F(ReviewCommand, BadPolicyFileIsExitTwoNamingTheJsonPath) {

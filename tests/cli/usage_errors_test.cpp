@@ -67,7 +67,7 @@ TEST(UsageErrors, ValuesAreRefusedInTheHouseStyle) {
   expect_usage_error({"schedule", "--basis", "5"},
                      "tenure schedule: --method: is required (see 'tenure schedule --help')");
   expect_usage_error({"schedule", "--method", "none", "--basis", "5", "--format", "xml"},
-                     "tenure schedule: --format: must be one of table, json, not 'xml' (see "
+                     "tenure schedule: --format: must be one of text, json, not 'xml' (see "
                      "'tenure schedule --help')");
   expect_usage_error({"schedule", "--method", "none", "--basis", "5", "--switch", "--no-switch"},
                      "tenure schedule: --switch: cannot be given with --no-switch (see 'tenure "

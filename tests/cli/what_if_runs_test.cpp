@@ -36,10 +36,11 @@ class WhatIfRuns : public ::testing::Test {
   }
   // A baseline run with the fixture policy.
   testing::Run nightly(const std::string& as_of) {
-    return run_tenure({"review", "--db", path, "--policy", baseline, "--as-of", as_of});
+    return run_tenure(
+        {"review", "--db", path, "--policy", baseline, "--as-of", as_of, "--format", "text"});
   }
   testing::Run what_if(const std::string& as_of, const std::string& name,
-                       const std::string& format = "table") {
+                       const std::string& format = "text") {
     return run_tenure({"review", "--db", path, "--policy", lead_3, "--as-of", as_of, "--scenario",
                        name, "--format", format});
   }

@@ -36,7 +36,7 @@ TEST(CliEquivalenceTest, TenureCaseReturnsWhatTheCaseCommandPrints) {
   const std::vector<std::string> files = case_fixtures();
   ASSERT_FALSE(files.empty());
   for (const std::string& file : files) {
-    const Output command = run(tenure_command() + " case " + quoted(file));
+    const Output command = run(tenure_command() + " case --format json " + quoted(file));
     ASSERT_EQ(command.status, 0) << file << ": " << command.err;
     const Output sql = run(sqlite_with_tenure(":memory:") + " " +
                            quoted("SELECT tenure_case(readfile('" + file + "'));"));
