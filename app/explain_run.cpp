@@ -4,6 +4,7 @@
 #include <fmt/format.h>
 
 #include "core/errors.h"
+#include "app/unreviewed_asset.h"
 #include "db/run_reader.h"
 
 namespace tenure::app {
@@ -14,7 +15,8 @@ explain::Explanation explain_stored_asset(db::Connection& db, std::string_view a
   results::RunRow run = db::read_run(db, run_id);
   auto asset = db::read_asset_result(db, run.run_id, asset_id);
   if (!asset) {
-    throw InputError("ASSET", fmt::format("no asset '{}' in run {}", asset_id, run.run_id));
+    const auto policy = explain::run_policy(run);
+    throw InputError("ASSET", explain_refusal(why_not_reviewed(db, *policy, run, asset_id), run));
   }
   auto stored_class = db::read_class_result(db, run.run_id, asset->asset_class);
   if (!stored_class) {

@@ -6,19 +6,14 @@
 #include <string>
 
 #include "core/errors.h"
+#include "app/unreviewed_asset.h"
 #include "db/run_reader.h"
 #include "explain/explanation.h"
-#include "fleet/date.h"
 #include "replacement/stakes.h"
 #include "review/repair_reasons.h"
 
 namespace tenure::app {
 namespace {
-
-// A date column as the asset relation holds it, when it reads as a date.
-std::optional<Date> date_of(const std::optional<std::string>& text) {
-  return text ? parse_iso_date(*text) : std::nullopt;
-}
 
 // The asset the run reviewed: weighed, or a class that cannot be.
 void weigh(RepairCheck& out, const explain::Explanation& e) {
@@ -41,27 +36,24 @@ void weigh(RepairCheck& out, const explain::Explanation& e) {
   out.reason = review::repair_reason(*out.weighing, out.estimate, d.basis);
 }
 
-// The asset the run did not review, from its row in the asset relation and the run's rejections.
-void say_why_not(RepairCheck& out, db::Connection& db, const review::Policy& policy) {
-  const auto input = db::read_input_row(db, policy.sources, out.asset_id);
-  if (!input) throw InputError("ASSET", review::unknown_asset_rule(out.asset_id));
-  const auto as_of = parse_iso_date(out.as_of);
-  if (!as_of) throw RuntimeFailure(fmt::format("run {} has no as-of date", out.run_id));
-  if (const auto retired = date_of(input->retired_on); retired && *retired <= *as_of) {
-    out.not_weighed = review::NotWeighed::retired;
-    out.reason = review::retired_reason(out.asset_id, *input->retired_on);
-  } else if (const auto in_service = date_of(input->in_service_on);
-             in_service && *in_service > *as_of) {
-    out.not_weighed = review::NotWeighed::not_yet_in_service;
-    out.reason = review::not_yet_in_service_reason(out.asset_id, input->in_service_on, out.run_id,
-                                                   out.as_of);
-  } else if (const auto rejected =
-                 db::read_rejected_asset(db, out.run_id, policy.sources.assets, out.asset_id)) {
-    out.not_weighed = review::NotWeighed::rejected;
-    out.reason = review::rejected_reason(out.asset_id, out.run_id, rejected->reason);
-  } else {
-    out.not_weighed = review::NotWeighed::not_in_run;
-    out.reason = review::not_in_run_reason(out.asset_id, out.run_id);
+// The asset the run did not review, in the repair check's words.
+void say_why_not(RepairCheck& out, const Unreviewed& u) {
+  out.not_weighed = u.why;
+  switch (u.why) {
+    case review::NotWeighed::retired:
+      out.reason = review::retired_reason(out.asset_id, u.retired_on);
+      break;
+    case review::NotWeighed::not_yet_in_service:
+      out.reason =
+          review::not_yet_in_service_reason(out.asset_id, u.in_service_on, out.run_id, out.as_of);
+      break;
+    case review::NotWeighed::rejected:
+      out.reason = review::rejected_reason(out.asset_id, out.run_id, u.rejection);
+      break;
+    case review::NotWeighed::cannot_weigh:
+    case review::NotWeighed::not_in_run:
+      out.reason = review::not_in_run_reason(out.asset_id, out.run_id);
+      break;
   }
 }
 
@@ -95,7 +87,7 @@ RepairCheck check_repair(db::Connection& db, std::string_view asset_id, Money es
                                       std::move(*asset), std::nullopt));
     return out;
   }
-  say_why_not(out, db, *policy);
+  say_why_not(out, why_not_reviewed(db, *policy, run, asset_id));
   if (snapshot) snapshot->commit();
   return out;
 }

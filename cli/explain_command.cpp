@@ -63,8 +63,8 @@ void add_explain_command(CLI::App& app, const Console& console) {
       "cannot be read, 2 bad arguments or an asset not in the run.\n"
       "\n"
       "Examples:\n"
-      "  tenure explain --db fleet.db PU-0042\n"
-      "  tenure explain --db fleet.db PU-0042 --run 3 --format json");
+      "  tenure explain --db demo.db FLT-00109\n"
+      "  tenure explain --db demo.db FLT-00109 --run 1 --format json");
   command->callback([o, console] { run_explain(*o, console); });
 }
 

@@ -6,6 +6,9 @@
 #include <gtest/gtest.h>
 
 #include <cmath>
+#include <string>
+#include <utility>
+#include <vector>
 
 #include <fmt/format.h>
 #include <nlohmann/json.hpp>
@@ -147,7 +150,39 @@ TEST_F(ExplainCommand, UnknownAssetIsExitTwo) {
   const testing::Run r = run_tenure({"explain", "--db", path, "NOPE"});
   EXPECT_EQ(r.exit_code, 2);
   EXPECT_EQ(r.out, "");
-  EXPECT_EQ(r.err, "tenure explain: ASSET: no asset 'NOPE' in run 1\n");
+  EXPECT_EQ(r.err, "tenure explain: ASSET: no asset 'NOPE' in the asset relation\n");
+}
+
+// An asset the run did not weigh says why: retired on which date, rejected and why (its row in
+// tenure_rejected), not yet in service, or added after the run. Invented rows.
+TEST_F(ExplainCommand, AnAssetTheRunDidNotWeighSaysWhy) {
+  {
+    db::Connection db = db::Connection::open(path);
+    db.exec(
+        "INSERT INTO asset VALUES ('PF-RET', 'pump-fixture', '2024-01-15', 18000, '2025-04-30');"
+        "INSERT INTO asset VALUES ('PF-BAD', 'pump-fixture', '2019-05-15', 0, NULL);"
+        "INSERT INTO asset VALUES ('PF-NEW', 'pump-fixture', '2026-09-15', 18000, NULL);");
+    app::run_review(db, {fixtures::noiseless_policy(), parse_iso_date(fixtures::kAsOf), {}, {}});
+    db.exec("INSERT INTO asset VALUES ('PF-LATE', 'pump-fixture', '2020-01-15', 18000, NULL);");
+  }
+  const std::string as_of = fixtures::kAsOf;
+  const std::vector<std::pair<std::string, std::string>> cases = {
+      {"PF-RET", "asset 'PF-RET' was retired on 2025-04-30, on or before run 2's as-of date " +
+                     as_of + ": a retired unit's costs feed its class's curves, but it gets no "
+                             "verdict"},
+      {"PF-BAD", "asset 'PF-BAD' was rejected by run 2: first_cost 0 must be greater than 0 (its "
+                 "row in tenure_rejected)"},
+      {"PF-NEW", "asset 'PF-NEW' goes into service on 2026-09-15, after run 2's as-of date " +
+                     as_of + ": the run did not weigh it"},
+      {"PF-LATE", "asset 'PF-LATE' is in the asset relation but not in run 2: it was most likely "
+                  "added after the run (run 'tenure review' to weigh it)"},
+  };
+  for (const auto& [asset, rule] : cases) {
+    const testing::Run r = run_tenure({"explain", "--db", path, asset});
+    EXPECT_EQ(r.exit_code, 2) << asset;
+    EXPECT_EQ(r.out, "") << asset;
+    EXPECT_EQ(r.err, "tenure explain: ASSET: " + rule + "\n");
+  }
 }
 
 TEST_F(ExplainCommand, UnknownRunIsExitTwoAndAnOlderRunCanBeNamed) {
