@@ -56,6 +56,12 @@ struct SpecWriter {
     return {{"method", "macrs"}, {"recovery_years", s.recovery_years}};
   }
   nlohmann::json operator()(const NoDepreciationSpec&) const { return {{"method", "none"}}; }
+  nlohmann::json operator()(const PoolSpec& s) const {
+    nlohmann::json out = {
+        {"method", "pool"}, {"rate", s.rate}, {"half_year_rule", s.half_year_rule}};
+    if (s.first_year_allowance) out["first_year_allowance"] = *s.first_year_allowance;
+    return out;
+  }
 };
 
 }  // namespace
