@@ -35,6 +35,12 @@ const std::vector<DepreciationForm> kForms = {
      {"recovery_years"},
      [](const JsonObject& o) -> Spec { return MacrsSpec{o.whole_number("recovery_years", 1)}; }},
     {"none", {}, [](const JsonObject&) -> Spec { return NoDepreciationSpec{}; }},
+    {"pool",
+     {"rate", "half_year_rule", "first_year_allowance"},
+     [](const JsonObject& o) -> Spec {
+       return PoolSpec{o.number("rate"), o.boolean("half_year_rule"),
+                       o.optional_number("first_year_allowance")};
+     }},
 };
 
 struct SpecWriter {
