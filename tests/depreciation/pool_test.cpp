@@ -116,7 +116,11 @@ TEST(Pool, IsAPoolToSaleRulesAndHoldsNoAmount) {
   EXPECT_EQ(pool.salvage(), 0);
   EXPECT_EQ(pool.disposal_year_fraction(1), 1.0);
   EXPECT_EQ(pool.disposal_year_fraction(7), 1.0);
-  EXPECT_EQ(pool.scaled(3.5)->deductions(3500), pool.deductions(3500));
+  // scaled(f) on f x the basis deducts f times as much, in as many listed years (method.h).
+  const std::vector<Money> base = pool.deductions(1000);
+  const std::vector<Money> bigger = pool.scaled(3.5)->deductions(3500);
+  ASSERT_EQ(bigger.size(), base.size());
+  for (std::size_t k = 0; k < base.size(); ++k) EXPECT_NEAR(bigger[k], 3.5 * base[k], 1e-9);
   // Every other method is no pool.
   const StraightLine sl(StraightLineSpec{5, 0});
   EXPECT_EQ(sl.pool_rate(), std::nullopt);

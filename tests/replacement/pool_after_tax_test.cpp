@@ -13,6 +13,8 @@
 #include <optional>
 #include <vector>
 
+#include "replacement/break_even.h"
+#include "replacement/case_analysis.h"
 #include "replacement/keeping_costs.h"
 #include "replacement/life_curve.h"
 
@@ -96,6 +98,31 @@ TEST(PoolAfterTax, DefenderInThePoolWeighsOnlyItsProceeds) {
   const double ucc = 70000 * 0.85 * std::pow(0.7, 5);
   EXPECT_NEAR(table.start.book_value, ucc, 1e-9);
   EXPECT_NEAR(table.start.tax, -t * d * (ucc - s0) / (k + d), 1e-9);
+}
+
+TEST(PoolAfterTax, PriceLinesStayExact) {
+  // The break-even price (break_even.h) takes each EUAC as affine in the price P, with market
+  // values the same fractions of P. The pool's sale rule is linear in P (min(S, C) with S and C
+  // both proportional to P), so the lines made at one price give the EUACs at others.
+  const auto truck = [](Money price) {
+    const double s = price / 90000;
+    return Ownership{price,
+                     0,
+                     price,
+                     {5000, 6200, 7600, 9200, 11000},
+                     {70000 * s, 56000 * s, 45000 * s, 36500 * s, 29500 * s},
+                     class_10()};
+  };
+  const auto rates = tax::Rates::make(0.10, kTax, kAfterTaxMarr);
+  const Ownership c = truck(90000);
+  const auto lines = price_lines(c, analyse_asset(c, rates), rates, Basis::after_tax);
+  for (Money price : {1000.0, 45000.0, 250000.0}) {
+    const auto euac = analyse_asset(truck(price), rates).on(Basis::after_tax).curve.euac;
+    ASSERT_EQ(euac.size(), lines.size());
+    for (std::size_t n = 0; n < euac.size(); ++n) {
+      EXPECT_NEAR(lines[n].slope * price + lines[n].intercept, euac[n], kRelative * euac[n]);
+    }
+  }
 }
 
 }  // namespace
