@@ -3,6 +3,7 @@
 #include "depreciation/macrs.h"
 #include "depreciation/method.h"
 #include "depreciation/no_depreciation.h"
+#include "depreciation/pool.h"
 #include "depreciation/straight_line.h"
 #include "depreciation/sum_of_years_digits.h"
 
@@ -24,6 +25,9 @@ struct MethodBuilder {
   }
   std::shared_ptr<const Method> operator()(const NoDepreciationSpec&) const {
     return std::make_shared<NoDepreciation>();
+  }
+  std::shared_ptr<const Method> operator()(const PoolSpec& spec) const {
+    return std::make_shared<Pool>(spec);
   }
 };
 

@@ -10,6 +10,7 @@
 #pragma once
 
 #include <memory>
+#include <optional>
 #include <string_view>
 #include <variant>
 #include <vector>
@@ -38,6 +39,10 @@ class Method {
   // deductions of scaled(f) on f x basis are f times those of this method on basis; the
   // break-even price (replacement/break_even.h) rests on it.
   virtual std::shared_ptr<const Method> scaled(double factor) const = 0;
+  // A pooled method's write-down rate d (pool.h); nullopt for every other method. A pool's
+  // deductions never end: Schedule carries its balance on at d past the years it lists, and
+  // tax::sale_at applies the pool's sale rule (tax/pool_disposal.h) instead of recapture.
+  virtual std::optional<Rate> pool_rate() const { return std::nullopt; }
 };
 
 // Parameters of each method, as in a case file's depreciation object (SPEC 5). Each method's
@@ -60,9 +65,14 @@ struct MacrsSpec {
   Years recovery_years;  // 3, 5, 7, 10, 15 or 20 (GDS, half-year convention)
 };
 struct NoDepreciationSpec {};
+struct PoolSpec {
+  Rate rate;            // d: the share of the pool's balance deducted each year, 0 < d <= 1
+  bool half_year_rule;  // year 1 deducts d on half the addition
+  std::optional<Rate> first_year_allowance;  // f, 0 < f <= 1: f of the addition in year 1
+};
 
 using Spec = std::variant<StraightLineSpec, DecliningBalanceSpec, SumOfYearsDigitsSpec, MacrsSpec,
-                          NoDepreciationSpec>;
+                          NoDepreciationSpec, PoolSpec>;
 
 // Builds the method a spec describes; throws InputError for out-of-range parameters.
 std::shared_ptr<const Method> make_method(const Spec& spec);

@@ -3,13 +3,15 @@
 #include "depreciation/schedule.h"
 
 #include <algorithm>
+#include <cmath>
 
 #include "core/checks.h"
 #include "core/errors.h"
 
 namespace tenure::depreciation {
 
-Schedule::Schedule(const Method& method, Money basis) : basis_(basis) {
+Schedule::Schedule(const Method& method, Money basis)
+    : basis_(basis), pool_rate_(method.pool_rate()) {
   require_positive(basis_, "basis");
   deductions_ = method.deductions(basis_);
   disposal_fractions_.reserve(deductions_.size());
@@ -34,17 +36,22 @@ Schedule::Schedule(const Method& method, Money basis) : basis_(basis) {
 }
 
 Money Schedule::deduction(Years year) const {
-  if (year < 1 || year > years()) return 0;
+  if (year < 1) return 0;
+  if (year > years()) return pool_rate_ ? *pool_rate_ * book_value(year - 1) : 0;
   return deductions_[static_cast<std::size_t>(year - 1)];
 }
 
 Money Schedule::book_value(Years year) const {
   if (year < 0) throw InputError("year", "must be >= 0");
+  if (year > years() && pool_rate_) {
+    return book_values_.back() * std::pow(1 - *pool_rate_, year - years());
+  }
   return book_values_[static_cast<std::size_t>(std::min(year, years()))];
 }
 
 Money Schedule::deduction_if_sold(Years year) const {
-  if (year < 1 || year > years()) return 0;
+  if (year < 1) return 0;
+  if (year > years()) return deduction(year);  // nothing, or a pool's full year
   const auto index = static_cast<std::size_t>(year - 1);
   return deductions_[index] * disposal_fractions_[index];
 }

@@ -35,6 +35,12 @@ const std::vector<DepreciationForm> kForms = {
      {"recovery_years"},
      [](const JsonObject& o) -> Spec { return MacrsSpec{o.whole_number("recovery_years", 1)}; }},
     {"none", {}, [](const JsonObject&) -> Spec { return NoDepreciationSpec{}; }},
+    {"pool",
+     {"rate", "half_year_rule", "first_year_allowance"},
+     [](const JsonObject& o) -> Spec {
+       return PoolSpec{o.number("rate"), o.boolean("half_year_rule"),
+                       o.optional_number("first_year_allowance")};
+     }},
 };
 
 struct SpecWriter {
@@ -56,6 +62,12 @@ struct SpecWriter {
     return {{"method", "macrs"}, {"recovery_years", s.recovery_years}};
   }
   nlohmann::json operator()(const NoDepreciationSpec&) const { return {{"method", "none"}}; }
+  nlohmann::json operator()(const PoolSpec& s) const {
+    nlohmann::json out = {
+        {"method", "pool"}, {"rate", s.rate}, {"half_year_rule", s.half_year_rule}};
+    if (s.first_year_allowance) out["first_year_allowance"] = *s.first_year_allowance;
+    return out;
+  }
 };
 
 }  // namespace

@@ -1,5 +1,6 @@
 // The depreciation object of a case or policy file (SPEC 5), read into a depreciation::Spec and
-// written back. Every field a method lists is required; there are no silent defaults.
+// written back. Every field a method lists is required, but a pool's first_year_allowance
+// (absent: none); there are no silent defaults.
 //
 //   {"method": "straight_line", "life_years": 5, "salvage": 0}
 //   {"method": "declining_balance", "life_years": 5, "rate": 2.0, "salvage": 0,
@@ -7,6 +8,8 @@
 //   {"method": "sum_of_years_digits", "life_years": 5, "salvage": 0}
 //   {"method": "macrs", "recovery_years": 5}
 //   {"method": "none"}
+//   {"method": "pool", "rate": 0.30, "half_year_rule": true}        // CCA class 10 (Canada)
+//   {"method": "pool", "rate": 0.18, "half_year_rule": false, "first_year_allowance": 0.40}
 //
 //   Spec spec = read_depreciation(challenger.object("depreciation"));
 //   // "$.challenger.depreciation.method: unknown method 'foo' (expected one of ...)"
@@ -25,7 +28,8 @@
 
 namespace tenure::formats {
 
-// One accepted form of the depreciation object: the method's name and its required fields.
+// One accepted form of the depreciation object: the method's name and its fields (all
+// required but a pool's first_year_allowance).
 struct DepreciationForm {
   std::string_view method;
   std::vector<std::string_view> fields;
@@ -39,7 +43,7 @@ const std::vector<DepreciationForm>& depreciation_forms();
 const DepreciationForm* find_depreciation_form(std::string_view method);
 
 // The names of depreciation_forms() in their order, for messages and help texts:
-// "straight_line, declining_balance, sum_of_years_digits, macrs, none".
+// "straight_line, declining_balance, sum_of_years_digits, macrs, none, pool".
 std::string depreciation_method_names();
 
 // Reads a depreciation object. Checks types, unknown and missing fields, and whole years; the

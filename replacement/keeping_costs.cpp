@@ -4,7 +4,6 @@
 #include "core/errors.h"
 #include "depreciation/schedule.h"
 #include "interest/factors.h"
-#include "tax/disposal.h"
 
 namespace tenure::replacement {
 
@@ -46,13 +45,7 @@ AfterTaxTable after_tax_table(const Ownership& asset, const tax::Rates& rates) {
   AfterTaxTable table;
   // Selling now: the book value now is the basis less the full deductions of completed years
   // 1..age (SPEC 6, defender). For a new unit the sale is at cost, so no tax.
-  table.start.market_value = asset.value_now;
-  table.start.book_value = schedule.book_value(age);
-  table.start.depreciation_in_year = 0;
-  table.start.gain = asset.value_now - table.start.book_value;
-  table.start.tax =
-      tax::tax_on_disposal({asset.value_now, table.start.book_value, asset.first_cost}, rates);
-  table.start.net_proceeds = asset.value_now - table.start.tax;
+  table.start = tax::sale_now(asset.value_now, schedule, age, rates);
   for (Years k = 1; k <= asset.max_years(); ++k) {
     const auto index = static_cast<std::size_t>(k - 1);
     const Money cost = asset.operating_costs[index];

@@ -37,12 +37,21 @@ struct SaleFlow {
   Money depreciation_in_year;  // the disposal-year deduction of the last year kept
   Money book_value;            // book value at the sale
   Money gain;                  // market_value - book_value
-  Money tax;                   // tax_on_disposal (negative is a saving)
+  Money tax;                   // tax on the sale (negative is a saving)
   Money net_proceeds;          // market_value - tax
 };
 
-// Selling at the end of schedule year `schedule_year` for `market_value`.
+// Selling at the end of schedule year `schedule_year` for `market_value`, after that year's
+// disposal-year deduction. The tax is tax_on_disposal (tax/disposal.h), or for a pool
+// (schedule.pool_rate()) the pool's sale rule, tax_on_pool_sale (tax/pool_disposal.h).
 SaleFlow sale_at(Money market_value, const depreciation::Schedule& schedule, Years schedule_year,
                  const Rates& rates);
+
+// Selling now, `age` completed years into the schedule (a defender's opportunity cost, SPEC 6):
+// the book value is the basis less the full deductions of years 1..age, no deduction is taken
+// in the sale, and the tax follows the same rule as sale_at. A new unit (age 0) sold at its
+// cost bears no tax.
+SaleFlow sale_now(Money market_value, const depreciation::Schedule& schedule, Years age,
+                  const Rates& rates);
 
 }  // namespace tenure::tax

@@ -18,7 +18,7 @@ using testing::run_tenure;
 using testing::TempDir;
 
 const char* const kFixtures[] = {"delivery_van.json", "standby_generator.json",
-                                 "forklift_before_tax.json"};
+                                 "forklift_before_tax.json", "haul_truck_cca.json"};
 
 // What the library makes of the file, to compare the process's output with.
 nlohmann::json expected_json(const std::string& file) {
@@ -48,6 +48,14 @@ TEST(CaseCommand, FixturesCoverTheirDesign) {
   const nlohmann::json forklift = expected_json(fixture("forklift_before_tax.json"));
   EXPECT_EQ(forklift["basis"], "before_tax");
   EXPECT_FALSE(forklift["challenger"].contains("after_tax"));
+  // haul_truck_cca: both units in one pool under the half-year rule (SPEC 13), after tax.
+  const nlohmann::json truck = expected_json(fixture("haul_truck_cca.json"));
+  EXPECT_EQ(truck["basis"], "after_tax");
+  EXPECT_TRUE(truck.contains("defender") && truck.contains("study_period"));
+  const replacement::Case pooled =
+      formats::read_case(testing::slurp(fixture("haul_truck_cca.json")));
+  EXPECT_EQ(pooled.challenger.depreciation->name(), "pool");
+  EXPECT_EQ(pooled.defender->depreciation->name(), "pool");
   for (const char* name : kFixtures) {
     EXPECT_EQ(
         testing::slurp(fixture(name)).rfind("// Invented example for tenure; not real data.\n", 0),

@@ -102,7 +102,7 @@ TEST(ScheduleCommand, ParametersAreRequiredAndCheckedByOption) {
              "tenure schedule: --dispose-in-year: must be >= 1");
   expect_bad({"schedule", "--method", "double", "--basis", "100"},
              "tenure schedule: --method: unknown method 'double' (expected one of "
-             "straight_line, declining_balance, sum_of_years_digits, macrs, none)");
+             "straight_line, declining_balance, sum_of_years_digits, macrs, none, pool)");
 }
 
 TEST(ScheduleCommand, UsageErrorsExitWithTwo) {

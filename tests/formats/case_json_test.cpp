@@ -142,7 +142,7 @@ TEST(ReadCase, EveryBadInputNamesItsPathAndRule) {
        "$.study_period_years|must be >= 1"},
       {"unknown method", [](json& c) { c["challenger"]["depreciation"]["method"] = "double"; },
        "$.challenger.depreciation.method|unknown method 'double' (expected one of "
-       "straight_line, declining_balance, sum_of_years_digits, macrs, none)"},
+       "straight_line, declining_balance, sum_of_years_digits, macrs, none, pool)"},
       {"recovery period 4", [](json& c) { c["defender"]["depreciation"]["recovery_years"] = 4; },
        "$.defender.depreciation.recovery_years|must be one of 3, 5, 7, 10, 15, 20"},
       {"salvage above first cost",

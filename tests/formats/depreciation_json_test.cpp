@@ -69,7 +69,7 @@ TEST(DepreciationJson, RejectsUnknownFieldsAndMethods) {
   EXPECT_EQ(read_error({{"method", "foo"}}),
             kPath +
                 ".method|unknown method 'foo' (expected one of straight_line, "
-                "declining_balance, sum_of_years_digits, macrs, none)");
+                "declining_balance, sum_of_years_digits, macrs, none, pool)");
   EXPECT_EQ(read_error({{"method", 5}}), kPath + ".method|expected a string");
   EXPECT_EQ(read_error(json::array()), kPath + "|expected an object");
 }
@@ -130,7 +130,7 @@ TEST(DepreciationJson, FormsListEveryMethodOnce) {
   std::vector<std::string_view> names;
   for (const DepreciationForm& form : depreciation_forms()) names.push_back(form.method);
   EXPECT_EQ(names, (std::vector<std::string_view>{"straight_line", "declining_balance",
-                                                  "sum_of_years_digits", "macrs", "none"}));
+                                                  "sum_of_years_digits", "macrs", "none", "pool"}));
   EXPECT_EQ(find_depreciation_form("macrs")->fields,
             std::vector<std::string_view>{"recovery_years"});
   EXPECT_EQ(find_depreciation_form("nope"), nullptr);
@@ -138,7 +138,7 @@ TEST(DepreciationJson, FormsListEveryMethodOnce) {
 
 TEST(DepreciationJson, MethodNamesFollowTheForms) {
   EXPECT_EQ(depreciation_method_names(),
-            "straight_line, declining_balance, sum_of_years_digits, macrs, none");
+            "straight_line, declining_balance, sum_of_years_digits, macrs, none, pool");
 }
 
 }  // namespace

@@ -77,7 +77,7 @@ TEST(FlatDepreciation, EveryRuleNamesTheFlatParameter) {
       // (1) the method.
       {{.method = "linear", .basis = 1},
        "method|unknown method 'linear' (expected one of straight_line, declining_balance, "
-       "sum_of_years_digits, macrs, none)"},
+       "sum_of_years_digits, macrs, none, pool)"},
       // (2) in the order of FlatDepreciation: basis, salvage, life, rate, switch.
       {{.method = "none"}, "basis|missing for none"},
       {{.method = "straight_line", .basis = 1000}, "salvage|missing for straight_line"},
