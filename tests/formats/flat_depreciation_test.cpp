@@ -135,7 +135,7 @@ TEST(FlatDepreciation, AnObjectsErrorsAreAtItsJsonPaths) {
        "$.life_years|unknown key (expected one of method)"},
       {{.method = "[1]", .basis = 1000},
        "method|unknown method '[1]' (expected one of straight_line, declining_balance, "
-       "sum_of_years_digits, macrs, none)"},
+       "sum_of_years_digits, macrs, none, pool)"},
       {{.method = "{", .basis = 1000},
        "$|invalid JSON at line 1, column 2: syntax error while parsing object key - unexpected "
        "end of input; expected string literal"},
