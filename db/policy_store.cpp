@@ -24,12 +24,20 @@ std::int64_t store_policy(Connection& db, std::string_view policy_json) {
   return id;
 }
 
-std::optional<std::string> latest_policy(Connection& db) {
+std::optional<StoredPolicy> latest_stored_policy(Connection& db) {
   Statement exists(db, "SELECT 1 FROM sqlite_schema WHERE type = 'table' AND name = 'tenure_policy'");
   if (!exists.step()) return std::nullopt;
-  Statement latest(db, "SELECT policy_json FROM main.tenure_policy ORDER BY policy_id DESC LIMIT 1");
+  Statement latest(db,
+                   "SELECT policy_id, stored_at, policy_json FROM main.tenure_policy "
+                   "ORDER BY policy_id DESC LIMIT 1");
   if (!latest.step()) return std::nullopt;
-  return std::string(latest.text(0));
+  return StoredPolicy{latest.integer(0), std::string(latest.text(1)), std::string(latest.text(2))};
+}
+
+std::optional<std::string> latest_policy(Connection& db) {
+  std::optional<StoredPolicy> latest = latest_stored_policy(db);
+  if (!latest) return std::nullopt;
+  return std::move(latest->text);
 }
 
 }  // namespace tenure::db

@@ -21,7 +21,17 @@ void create_policy_table(Connection& db);
 // The caller checks the text first (formats/policy_json.h).
 std::int64_t store_policy(Connection& db, std::string_view policy_json);
 
-// The latest stored policy text, or nullopt when none is stored (or the table does not exist).
+// One stored policy: its id, when it was stored (UTC, ISO 8601) and its text as given.
+struct StoredPolicy {
+  std::int64_t policy_id;
+  std::string stored_at;
+  std::string text;
+};
+
+// The latest stored policy, or nullopt when none is stored (or the table does not exist).
+std::optional<StoredPolicy> latest_stored_policy(Connection& db);
+
+// The latest stored policy's text, or nullopt when none is stored.
 std::optional<std::string> latest_policy(Connection& db);
 
 }  // namespace tenure::db

@@ -172,7 +172,26 @@ TEST_F(ReviewCommand, PolicySetShowAndCheck) {
   EXPECT_EQ(run_tenure({"policy", "check", policy}).exit_code, 0);
   const cli::testing::Run set = run_tenure({"policy", "set", "--db", db, policy});
   ASSERT_EQ(set.exit_code, 0) << set.err;
-  EXPECT_EQ(run_tenure({"policy", "show", "--db", db}).out, slurp(policy));
+  EXPECT_EQ(set.out, "stored policy 2 in " + db + "\n");  // the demo stored policy 1
+  // show names it in a comment line, so that what it prints is still a policy file ...
+  const cli::testing::Run show = run_tenure({"policy", "show", "--db", db});
+  const std::regex header(R"(^// policy 2, stored \d{4}-\d\d-\d\dT\d\d:\d\d:\d\dZ\n)");
+  EXPECT_TRUE(std::regex_search(show.out, header)) << show.out;
+  EXPECT_EQ(show.out.substr(show.out.find('\n') + 1), slurp(policy));
+  // ... and storing it again, or the same values laid out otherwise, stores nothing.
+  const std::string shown = dir.write("shown.json", show.out);
+  const std::string relaid = dir.write("relaid.json",
+      "{\"classes\": {\"van-service\": {\"max_life_years\": 12, \"challenger_first_cost\": 40000,"
+      "\"market_value\": {\"annual_decline\": 0.2}, \"depreciation\": {\"method\": \"none\"}}},"
+      " \"income_tax_rate\": 0, \"marr\": 0.08}");
+  for (const std::string& file : {policy, shown, relaid}) {
+    const cli::testing::Run again = run_tenure({"policy", "set", "--db", db, file});
+    EXPECT_EQ(again.exit_code, 0) << again.err;
+    EXPECT_TRUE(std::regex_match(
+        again.out, std::regex("policy 2 in " + db + R"( \(stored [0-9T:Z-]+\) already has )"
+                              R"(these values: nothing stored\n)")))
+        << again.out;
+  }
   // The stored policy has no class for most demo assets: they are rejected, the run goes on.
   const cli::testing::Run r = run_tenure({"review", "--db", db, "--as-of", "2026-11-30", "--format", "json"});
   ASSERT_EQ(r.exit_code, 0) << r.err;
