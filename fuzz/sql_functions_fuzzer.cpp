@@ -37,7 +37,7 @@ struct Call {
 const Call kCalls[] = {
     {"SELECT tenure_factor(?1, ?2, ?3)", 3},
     {"SELECT tenure_geometric_factor(?1, ?2, ?3)", 3},
-    {"SELECT tenure_npv(?1, ?2)", 2},
+    {"SELECT tenure_present_worth(?1, ?2)", 2},
     {"SELECT tenure_euac(?1, ?2)", 2},
     {"SELECT tenure_book_value(?1, ?2, ?3, ?4, ?5)", 5},
     {"SELECT tenure_book_value(?1, ?2, ?3, ?4, ?5, ?6, ?7)", 7},

@@ -14,7 +14,7 @@
 //   2|2449.0
 //
 // What it registers, one file each (functions.h lists them with their signatures):
-//   tenure_version, tenure_factor, tenure_geometric_factor, tenure_npv, tenure_euac,
+//   tenure_version, tenure_factor, tenure_geometric_factor, tenure_present_worth, tenure_euac,
 //   tenure_book_value, tenure_macrs_rate, tenure_case     pure calculators
 //   tenure_depreciation                                   table-valued (eponymous virtual table)
 //   tenure_review                                         the nightly review, direct SQL only
@@ -57,7 +57,7 @@ constexpr FunctionEntry kFunctions[] = {
     {"tenure_version", 0, kPure, version_function},
     {"tenure_factor", 3, kPure, factor_function},
     {"tenure_geometric_factor", 3, kPure, geometric_factor_function},
-    {"tenure_npv", 2, kPure, npv_function},
+    {"tenure_present_worth", 2, kPure, present_worth_function},
     {"tenure_euac", 2, kPure, euac_function},
     {"tenure_book_value", 5, kPure, book_value_function},
     {"tenure_book_value", 7, kPure, book_value_function},

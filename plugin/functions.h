@@ -3,7 +3,7 @@
 //
 //   factor_functions.cpp      tenure_version(), tenure_factor(kind, i, n),
 //                             tenure_geometric_factor(i, g, n)
-//   cash_flow_functions.cpp   tenure_npv(i, cash_flows), tenure_euac(i, cash_flows)
+//   cash_flow_functions.cpp   tenure_present_worth(i, cash_flows), tenure_euac(i, cash_flows)
 //   book_value_functions.cpp  tenure_book_value(method, basis, salvage, life, year[, rate,
 //                             switch_to_straight_line]), tenure_macrs_rate(recovery_years, year)
 //   depreciation_table.cpp    tenure_depreciation(method, basis, salvage, life[, rate,
@@ -20,7 +20,7 @@ namespace tenure::plugin {
 void version_function(sqlite3_context* context, int argc, sqlite3_value** argv);
 void factor_function(sqlite3_context* context, int argc, sqlite3_value** argv);
 void geometric_factor_function(sqlite3_context* context, int argc, sqlite3_value** argv);
-void npv_function(sqlite3_context* context, int argc, sqlite3_value** argv);
+void present_worth_function(sqlite3_context* context, int argc, sqlite3_value** argv);
 void euac_function(sqlite3_context* context, int argc, sqlite3_value** argv);
 void book_value_function(sqlite3_context* context, int argc, sqlite3_value** argv);
 void macrs_rate_function(sqlite3_context* context, int argc, sqlite3_value** argv);
