@@ -5,19 +5,37 @@
 #include <cstring>
 #include <filesystem>
 #include <fstream>
-#include <sstream>
+#include <string>
 
 #include "core/errors.h"
+#include "formats/json_text.h"
 
 namespace tenure::cli {
 
-std::string read_input_file(const std::string& file, std::istream& standard_input) {
-  std::ostringstream text;
-  if (file == "-") {
-    text << standard_input.rdbuf();
-    if (standard_input.bad()) throw InputError("-", "cannot read standard input");
-    return text.str();
+namespace {
+
+// At most one byte more than a case or policy text may have, so that a larger one is refused
+// without reading all of it.
+std::string read_bounded(std::istream& in, const std::string& name) {
+  std::string text;
+  char chunk[1 << 16];
+  while (text.size() <= formats::kMaxJsonTextBytes && in.read(chunk, sizeof chunk).gcount() > 0) {
+    text.append(chunk, static_cast<std::size_t>(in.gcount()));
   }
+  if (in.bad()) {
+    throw InputError(name, name == "-" ? "cannot read standard input" : "cannot read the file");
+  }
+  if (text.size() > formats::kMaxJsonTextBytes) {
+    throw InputError(name, "is larger than " + std::to_string(formats::kMaxJsonTextBytes) +
+                               " bytes (16 MiB), the most a case or policy file may be");
+  }
+  return text;
+}
+
+}  // namespace
+
+std::string read_input_file(const std::string& file, std::istream& standard_input) {
+  if (file == "-") return read_bounded(standard_input, "-");
   // A directory opens like a file on Linux and only fails on reading; say what it is.
   std::error_code ignored;
   if (std::filesystem::is_directory(file, ignored)) {
@@ -25,9 +43,7 @@ std::string read_input_file(const std::string& file, std::istream& standard_inpu
   }
   std::ifstream in(file, std::ios::binary);
   if (!in) throw InputError(file, std::string("cannot read the file: ") + std::strerror(errno));
-  text << in.rdbuf();
-  if (in.bad()) throw InputError(file, "cannot read the file");
-  return text.str();
+  return read_bounded(in, file);
 }
 
 }  // namespace tenure::cli

@@ -36,7 +36,18 @@ Years whole_years(double value, const std::string& where, Years min, Years max) 
 
 std::string key_path(std::string_view parent, std::string_view key) {
   std::string path = fmt::format("{}.", parent);
-  for (const char c : key) {
+  // A key longer than any name a person types is cut, at a UTF-8 character boundary, so that
+  // one line of a message stays one readable line.
+  constexpr std::size_t kShown = 48;
+  std::string_view shown = key;
+  std::string rest;
+  if (key.size() > 2 * kShown) {
+    std::size_t cut = kShown;
+    while (cut > 0 && (static_cast<unsigned char>(key[cut]) & 0xC0) == 0x80) --cut;
+    shown = key.substr(0, cut);
+    rest = fmt::format("...(a key of {} bytes)", key.size());
+  }
+  for (const char c : shown) {
     // A control character would reach the terminal raw: written as JSON writes it.
     const auto byte = static_cast<unsigned char>(c);
     if (byte < 0x20 || byte == 0x7F) {
@@ -45,7 +56,7 @@ std::string key_path(std::string_view parent, std::string_view key) {
       path += c;
     }
   }
-  return path;
+  return path + rest;
 }
 
 std::string index_path(std::string_view parent, std::size_t index) {

@@ -29,7 +29,8 @@ namespace tenure::formats {
 inline constexpr Years kMaxYears = 1000;
 
 // "$.challenger" + "first_cost" -> "$.challenger.first_cost". Control characters in the key are
-// written \u0001 and so on, so a message never carries them to a terminal.
+// written \u0001 and so on, so a message never carries them to a terminal, and a key of more than
+// 96 bytes is cut after its first 48: "$.kkk...kkk...(a key of 5000 bytes)".
 std::string key_path(std::string_view parent, std::string_view key);
 // "$.challenger.operating_costs" + 2 -> "$.challenger.operating_costs[2]".
 std::string index_path(std::string_view parent, std::size_t index);

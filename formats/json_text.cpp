@@ -101,7 +101,13 @@ class StrictReader {
 
 }  // namespace
 
+std::string too_large_rule(std::size_t bytes) {
+  return fmt::format("is {} bytes; a case or policy file may be at most {} bytes (16 MiB)", bytes,
+                     kMaxJsonTextBytes);
+}
+
 json parse_json_text(std::string_view text) {
+  if (text.size() > kMaxJsonTextBytes) throw InputError("$", too_large_rule(text.size()));
   // The parser would stop at a NUL byte and ignore what follows it.
   if (const std::size_t nul = text.find('\0'); nul != std::string_view::npos) {
     throw InputError("$", fmt::format("invalid JSON: a NUL byte at offset {}", nul));

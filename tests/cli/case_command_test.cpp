@@ -120,6 +120,20 @@ TEST(CaseCommand, MalformedJsonNamesLineAndColumn) {
   EXPECT_EQ(run.err.find('\n'), run.err.size() - 1) << "one line";
 }
 
+// A file above 16 MiB is refused, from a file or standard input, without reading all of it.
+TEST(CaseCommand, AFileTooLargeIsBadInputNamingIt) {
+  const TempDir dir;
+  const std::string large = dir.write("large.json", "{}" + std::string(std::size_t{17} << 20, ' '));
+  const std::string rule =
+      ": is larger than 16777216 bytes (16 MiB), the most a case or policy file may be\n";
+  const testing::Run file = run_tenure({"case", large});
+  EXPECT_EQ(file.exit_code, 2);
+  EXPECT_EQ(file.err, "tenure case: " + large + rule);
+  const testing::Run piped = run_tenure({"policy", "check", "-"}, testing::slurp(large));
+  EXPECT_EQ(piped.exit_code, 2);
+  EXPECT_EQ(piped.err, "tenure policy check: -" + rule);
+}
+
 TEST(CaseCommand, MissingOrUnreadableFileIsBadInputNamingIt) {
   const TempDir dir;
   const std::string missing = dir.path("no_such_case.json");

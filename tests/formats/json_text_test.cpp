@@ -74,6 +74,26 @@ TEST(JsonPath, WritesControlCharactersOfKeysEscaped) {
   EXPECT_EQ(key_path("$", "van-delivery"), "$.van-delivery");
 }
 
+TEST(JsonPath, CutsAKeyTooLongForOneLine) {
+  const std::string ninety_six(96, 'k');
+  EXPECT_EQ(key_path("$", ninety_six), "$." + ninety_six);
+  EXPECT_EQ(key_path("$", ninety_six + "k"), "$." + std::string(48, 'k') + "...(a key of 97 bytes)");
+  // Not inside a UTF-8 character: 47 bytes, then a 2-byte e-acute at bytes 47 and 48.
+  const std::string accented = std::string(47, 'a') + "\xc3\xa9" + std::string(60, 'b');
+  EXPECT_EQ(key_path("$", accented), "$." + std::string(47, 'a') + "...(a key of 109 bytes)");
+}
+
+TEST(JsonText, ATextAboveTheLimitIsRefusedBeforeParsing) {
+  std::string text = "{\"marr\": 0.1}";
+  text.resize(kMaxJsonTextBytes, ' ');
+  EXPECT_EQ(error_of(text).where(), "");  // exactly the limit: read
+  text += ' ';
+  const InputError error = error_of(text);
+  EXPECT_EQ(error.where(), "$");
+  EXPECT_EQ(error.rule(),
+            "is 16777217 bytes; a case or policy file may be at most 16777216 bytes (16 MiB)");
+}
+
 TEST(JsonText, ManySiblingsParse) {
   // 50,000 members in one object (a policy of that many classes) parse, each key checked.
   std::string text = "{";
