@@ -57,11 +57,11 @@ fuzz() {
 
 # Excluded under the sanitizers, with the reason:
 #   plugin_review_host_valgrind  Valgrind cannot run a program built with AddressSanitizer.
-#   plugin_sql_shell_test, plugin_cli_equivalence_test, plugin_install_consumer
-#                                load libtenure.so (which needs the sanitizer runtime first in
+#   plugin_sql_shell_test, plugin_cli_equivalence_test, plugin_repair_check_equivalence_test,
+#   plugin_install_consumer      load libtenure.so (which needs the sanitizer runtime first in
 #                                the process) into programs not built with it: the stock
 #                                sqlite3 shell and a consumer built outside this build.
-excluded='^(plugin_review_host_valgrind|plugin_sql_shell_test|plugin_cli_equivalence_test|plugin_install_consumer)$'
+excluded='^(plugin_review_host_valgrind|plugin_sql_shell_test|plugin_cli_equivalence_test|plugin_repair_check_equivalence_test|plugin_install_consumer)$'
 
 asan() {
   local t0=$SECONDS
