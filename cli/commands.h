@@ -29,8 +29,8 @@ struct Console {
 // spelling for every command that reads a database (not `demo`, which writes one).
 CLI::Option* add_db_option(CLI::App& command, std::string& db, const std::string& description);
 
-// --format FORMAT, one of `formats` ("text" for people, "json", ...), with the same words and
-// help in every command: "text, json: <description>".
+// --format FORMAT, one of `formats` ("text" for people, "json", ...), with the same words in
+// every command; the help lists the choices.
 CLI::Option* add_format_option(CLI::App& command, std::string& format,
                                const std::vector<std::string>& formats,
                                const std::string& description);

@@ -1,6 +1,4 @@
 // The --format option every command that prints shares (see commands.h).
-#include <fmt/format.h>
-
 #include "cli/commands.h"
 
 namespace tenure::cli {
@@ -9,8 +7,7 @@ CLI::Option* add_format_option(CLI::App& command, std::string& format,
                                const std::vector<std::string>& formats,
                                const std::string& description) {
   return command
-      .add_option("--format", format,
-                  fmt::format("{}: {}", fmt::join(formats, ", "), description))
+      .add_option("--format", format, description)
       ->type_name("FORMAT")
       ->check(CLI::IsMember(formats));
 }

@@ -52,6 +52,7 @@ void add_report_command(CLI::App& app, const Console& console) {
   add_db_option(*command, o->db, "the maintenance database (SQLite file)");
   command
       ->add_option("--out", o->out, "the HTML file to write; - writes the page to standard output")
+      ->type_name("FILE")
       ->required();
   command->add_option("--run", o->run, "the run to report; default: the latest baseline run")
       ->type_name("N");

@@ -171,9 +171,14 @@ void add_review_command(CLI::App& app, const Console& console) {
   CLI::App* command = app.add_subcommand(
       "review", "The nightly review: every asset's economic life, verdict and reason, into SQL views");
   add_db_option(*command, o->db, "the maintenance database (SQLite file)");
-  command->add_option("--policy", o->policy_file,
-                      "policy file (JSON); default: the latest policy stored in the database");
-  command->add_option("--as-of", o->as_of, "review as of this date (YYYY-MM-DD); default: today (the local date)");
+  command
+      ->add_option("--policy", o->policy_file,
+                   "policy file (JSON); default: the latest policy stored in the database")
+      ->type_name("FILE");
+  command
+      ->add_option("--as-of", o->as_of,
+                   "review as of this date (YYYY-MM-DD); default: today (the local date)")
+      ->type_name("DATE");
   command
       ->add_option("--scenario", o->scenario,
                    "store a what-if run under this name (1 to 64 letters, digits, '-', '_', "

@@ -25,6 +25,9 @@ install(TARGETS tenure_extension EXPORT tenureTargets
   INCLUDES DESTINATION ${CMAKE_INSTALL_INCLUDEDIR})
 if(TARGET tenure)
   install(TARGETS tenure RUNTIME DESTINATION ${CMAKE_INSTALL_BINDIR})
+  install(FILES ${TENURE_REFERENCE_DIR}/tenure.1 DESTINATION ${CMAKE_INSTALL_MANDIR}/man1)
+  install(FILES ${TENURE_REFERENCE_DIR}/tenure
+          DESTINATION ${CMAKE_INSTALL_DATADIR}/bash-completion/completions)
 endif()
 
 install(EXPORT tenureTargets NAMESPACE tenure:: DESTINATION ${TENURE_CMAKE_DIR})

@@ -1,6 +1,7 @@
 # Installs the build to a temporary prefix and builds the example host (examples/) against it as
 # another project would, once with CMake's find_package(tenure) and once with pkg-config, then
-# runs each on an invented demo database (made by the installed `tenure demo`).
+# runs each on an invented demo database (made by the installed `tenure demo`); checks that the
+# manual page and the bash completion are installed.
 #   cmake -DBUILD_DIR=build -DEXAMPLES=examples -DCASE=case.json -DWORK=dir -DPKG_CONFIG=path
 #         -DC_COMPILER=cc -DGENERATOR="Unix Makefiles" -P this file
 # Runs a command; its standard output is left in `output`.
@@ -25,6 +26,17 @@ endfunction()
 file(REMOVE_RECURSE ${WORK})
 set(prefix ${WORK}/prefix)
 run(${CMAKE_COMMAND} --install ${BUILD_DIR} --prefix ${prefix})
+
+# 0. The manual page and the bash completion, where man and bash look for them.
+file(READ ${prefix}/share/man/man1/tenure.1 page)
+if(NOT page MATCHES "^\\.TH TENURE 1 ")
+  message(FATAL_ERROR "share/man/man1/tenure.1 is not the manual page")
+endif()
+file(READ ${prefix}/share/bash-completion/completions/tenure script)
+if(NOT script MATCHES "complete -F _tenure tenure")
+  message(FATAL_ERROR "share/bash-completion/completions/tenure is not the completion")
+endif()
+message("installed: the manual page and the bash completion")
 
 # 1. CMake: find_package(tenure) and the target tenure::tenure.
 run(${CMAKE_COMMAND} -S ${EXAMPLES} -B ${WORK}/cmake-build -G ${GENERATOR}
