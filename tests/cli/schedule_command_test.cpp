@@ -57,7 +57,8 @@ TEST(ScheduleCommand, MacrsTakesAZeroSalvageAsSqlDoes) {
   const testing::Run some = run_tenure(
       {"schedule", "--method", "macrs", "--life", "5", "--salvage", "500", "--basis", "10000"});
   EXPECT_EQ(some.exit_code, 2);
-  EXPECT_EQ(some.err, "tenure schedule: --salvage: not used by method macrs (it takes --life)\n");
+  EXPECT_EQ(some.err, "tenure schedule: --salvage: not used by method macrs (it takes --life, "
+            "--convention, --quarter, --section-179, --bonus)\n");
 }
 
 // Bad arguments: exit 2, nothing on stdout, exactly `message` on stderr.
@@ -102,7 +103,8 @@ TEST(ScheduleCommand, ParametersAreRequiredAndCheckedByOption) {
              "tenure schedule: --dispose-in-year: must be >= 1");
   expect_bad({"schedule", "--method", "double", "--basis", "100"},
              "tenure schedule: --method: unknown method 'double' (expected one of "
-             "straight_line, declining_balance, sum_of_years_digits, macrs, none, pool)");
+             "straight_line, declining_balance, sum_of_years_digits, macrs, macrs_ads, none, "
+             "pool)");
 }
 
 TEST(ScheduleCommand, UsageErrorsExitWithTwo) {

@@ -86,7 +86,7 @@ SELECT * FROM tenure_depreciation('straight_line', 10000, 0, 0); -- error: tenur
 SELECT * FROM tenure_depreciation('straight_line', 10000, 0, 5.5); -- error: tenure_depreciation: 4th argument (life) must be a whole number, not 5.5
 SELECT * FROM tenure_depreciation('straight_line', 10000, 0, 5, NULL, NULL, 0); -- error: tenure_depreciation: 7th argument (dispose_in_year) must be >= 1
 SELECT * FROM tenure_depreciation('none', 10000, 0, 5); -- error: tenure_depreciation: 4th argument (life) is not used by method none
-SELECT * FROM tenure_depreciation('linear', 10000, 0, 5); -- error: tenure_depreciation: unknown method 'linear' (expected one of straight_line, declining_balance, sum_of_years_digits, macrs, none, pool)
+SELECT * FROM tenure_depreciation('linear', 10000, 0, 5); -- error: tenure_depreciation: unknown method 'linear' (expected one of straight_line, declining_balance, sum_of_years_digits, macrs, macrs_ads, none, pool)
 SELECT * FROM tenure_depreciation(NULL, 10000, 0, 5); -- error: tenure_depreciation: 1st argument (method) must be text
 SELECT * FROM tenure_depreciation('{"method": "macrs", "recovery_years": 4}', 10000); -- error: tenure_depreciation: $.recovery_years: must be one of 3, 5, 7, 10, 15, 20
 SELECT * FROM tenure_depreciation('{"method": "macrs"}', 10000); -- error: tenure_depreciation: $.recovery_years: required whole number is missing
