@@ -47,6 +47,12 @@ struct MethodBuilder {
 
 }  // namespace
 
+std::optional<Money> section_179_of(const Spec& spec) {
+  if (const auto* macrs = std::get_if<MacrsSpec>(&spec)) return macrs->allowances.section_179;
+  if (const auto* ads = std::get_if<MacrsAdsSpec>(&spec)) return ads->allowances.section_179;
+  return std::nullopt;
+}
+
 std::shared_ptr<const Method> make_method(const Spec& spec) {
   return std::visit(MethodBuilder{}, spec);
 }

@@ -101,6 +101,9 @@ struct PoolSpec {
 using Spec = std::variant<StraightLineSpec, DecliningBalanceSpec, SumOfYearsDigitsSpec, MacrsSpec,
                           NoDepreciationSpec, PoolSpec, MacrsAdsSpec>;
 
+// The section 179 amount of a US spec (macrs, macrs_ads), nullopt when it has none.
+std::optional<Money> section_179_of(const Spec& spec);
+
 // Builds the method a spec describes, a US method's allowances around it (us_allowances.h);
 // throws InputError for out-of-range parameters.
 std::shared_ptr<const Method> make_method(const Spec& spec);
