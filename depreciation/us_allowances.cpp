@@ -18,8 +18,7 @@ std::vector<Money> with_year_one(std::vector<Money> deductions, Money amount) {
 
 }  // namespace
 
-UsAllowancesFirst::UsAllowancesFirst(std::shared_ptr<const Method> method,
-                                     UsAllowances allowances)
+UsAllowancesFirst::UsAllowancesFirst(std::shared_ptr<const Method> method, UsAllowances allowances)
     : method_(std::move(method)),
       section_179_(allowances.section_179.value_or(0)),
       bonus_(allowances.bonus.value_or(0)) {

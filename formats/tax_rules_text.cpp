@@ -22,10 +22,11 @@ struct Words {
                        s.life_years, money(s.salvage));
   }
   std::string operator()(const DecliningBalanceSpec& s) const {
-    return fmt::format("declining balance at {}x the straight-line rate over {} years to a "
-                       "salvage of {}{} (a book method)",
-                       s.rate, s.life_years, money(s.salvage),
-                       s.switch_to_straight_line ? ", switching to straight line" : "");
+    return fmt::format(
+        "declining balance at {}x the straight-line rate over {} years to a "
+        "salvage of {}{} (a book method)",
+        s.rate, s.life_years, money(s.salvage),
+        s.switch_to_straight_line ? ", switching to straight line" : "");
   }
   std::string operator()(const SumOfYearsDigitsSpec& s) const {
     return fmt::format("sum of the years' digits over {} years to a salvage of {} (a book method)",

@@ -42,6 +42,7 @@ struct PublishedColumn {
 // without the tables' rounding, to 0.01 (UnroundedMethodAgreesToOneUnit). From memory, not from a
 // stored source: Q2 7-year year 1 may be printed 17.85 where the rule here gives 17.86
 // (2/7 x 5/8 = 17.857%).
+// clang-format off: one published column per row.
 const std::vector<PublishedColumn> kPublished = {
     {1, 5, {35.00, 26.00, 15.60, 11.01, 11.01, 1.38}, "[brief] Table A-2"},
     {2, 5, {25.00, 30.00, 18.00, 11.37, 11.37, 4.26}, "[brief] Table A-3"},
@@ -50,28 +51,41 @@ const std::vector<PublishedColumn> kPublished = {
     {4, 7, {3.57, 27.55, 19.68, 14.06, 10.04, 8.73, 8.73, 7.64}, "[brief] Table A-5"},
     {1, 3, {58.33, 27.78, 12.35, 1.54}, "[fkco1] Table A-2"},
     {1, 7, {25.00, 21.43, 15.31, 10.93, 8.75, 8.74, 8.75, 1.09}, "[fkco1] Table A-2"},
-    {1, 10, {17.50, 16.50, 13.20, 10.56, 8.45, 6.76, 6.55, 6.55, 6.56, 6.55, 0.82},
+    {1,
+     10,
+     {17.50, 16.50, 13.20, 10.56, 8.45, 6.76, 6.55, 6.55, 6.56, 6.55, 0.82},
      "[fkco1] Table A-2"},
-    {1, 15, {8.75, 9.13, 8.21, 7.39, 6.65, 5.99, 5.90, 5.91, 5.90, 5.91, 5.90, 5.91, 5.90, 5.91,
-             5.90, 0.74},
+    {1,
+     15,
+     {8.75, 9.13, 8.21, 7.39, 6.65, 5.99, 5.90, 5.91, 5.90, 5.91, 5.90, 5.91, 5.90, 5.91, 5.90,
+      0.74},
      "[fkco1] Table A-2"},
     // The stored copy prints year 2 as "7.00", to 0.01 where the column has 0.001; 7.008 is the
     // cell its own year 3 needs (0.075 x (100 - 6.563 - 7.008) = 6.482, while 7.000 gives
     // 6.483), so the copy lost a digit. Its "7.00", read as cut to 0.01, is checked below.
-    {1, 20, {6.563, 7.008, 6.482, 5.996, 5.546, 5.130, 4.746, 4.459, 4.459, 4.459, 4.459, 4.460,
-             4.459, 4.460, 4.459, 4.460, 4.459, 4.460, 4.459, 4.460, 0.557},
+    {1,
+     20,
+     {6.563, 7.008, 6.482, 5.996, 5.546, 5.130, 4.746, 4.459, 4.459, 4.459, 4.459,
+      4.460, 4.459, 4.460, 4.459, 4.460, 4.459, 4.460, 4.459, 4.460, 0.557},
      "[fkco1] Table A-2"},
     {3, 3, {25.00, 50.00, 16.67, 8.33}, "[fkco3] Table A-4"},
     {3, 7, {10.71, 25.51, 18.22, 13.02, 9.30, 8.85, 8.86, 5.53}, "[fkco3] Table A-4"},
-    {3, 10, {7.50, 18.50, 14.80, 11.84, 9.47, 7.58, 6.55, 6.55, 6.56, 6.55, 4.10},
+    {3,
+     10,
+     {7.50, 18.50, 14.80, 11.84, 9.47, 7.58, 6.55, 6.55, 6.56, 6.55, 4.10},
      "[fkco3] Table A-4"},
-    {3, 15, {3.75, 9.63, 8.66, 7.80, 7.02, 6.31, 5.90, 5.90, 5.91, 5.90, 5.91, 5.90, 5.91, 5.90,
-             5.91, 3.69},
+    {3,
+     15,
+     {3.75, 9.63, 8.66, 7.80, 7.02, 6.31, 5.90, 5.90, 5.91, 5.90, 5.91, 5.90, 5.91, 5.90, 5.91,
+      3.69},
      "[fkco3] Table A-4"},
-    {3, 20, {2.813, 7.289, 6.742, 6.237, 5.769, 5.336, 4.936, 4.566, 4.460, 4.460, 4.460, 4.460,
-             4.461, 4.460, 4.461, 4.460, 4.461, 4.460, 4.461, 4.460, 2.788},
+    {3,
+     20,
+     {2.813, 7.289, 6.742, 6.237, 5.769, 5.336, 4.936, 4.566, 4.460, 4.460, 4.460,
+      4.460, 4.461, 4.460, 4.461, 4.460, 4.461, 4.460, 4.461, 4.460, 2.788},
      "[fkco3] Table A-4"},
 };
+// clang-format on
 
 // [fkco1]'s 20-year year 2 as printed there, "7.00": a cell cut to two decimals (see kPublished).
 TEST(MacrsMidQuarterTable, TwentyYearQuarterOneYearTwoAsPrinted) {
@@ -168,15 +182,21 @@ TEST(MacrsMidQuarterSchedule, SaleInQuarterFour) {
 
 TEST(MacrsMidQuarter, QuarterChecks) {
   EXPECT_TRUE(throws_input_error(
-      [] { Macrs m(MacrsSpec{5, MacrsConvention::mid_quarter, std::nullopt, {}}); }, "quarter",
-      "is required with the mid_quarter convention"));
+      [] {
+        Macrs m(MacrsSpec{5, MacrsConvention::mid_quarter, std::nullopt, {}});
+      },
+      "quarter", "is required with the mid_quarter convention"));
   EXPECT_TRUE(throws_input_error(
-      [] { Macrs m(MacrsSpec{5, MacrsConvention::half_year, 2, {}}); }, "quarter",
-      "applies only to the mid_quarter convention"));
+      [] {
+        Macrs m(MacrsSpec{5, MacrsConvention::half_year, 2, {}});
+      },
+      "quarter", "applies only to the mid_quarter convention"));
   for (int q : {0, 5, -1}) {
     EXPECT_TRUE(throws_input_error(
-        [q] { Macrs m(MacrsSpec{5, MacrsConvention::mid_quarter, q, {}}); }, "quarter",
-        "must be 1, 2, 3 or 4"))
+        [q] {
+          Macrs m(MacrsSpec{5, MacrsConvention::mid_quarter, q, {}});
+        },
+        "quarter", "must be 1, 2, 3 or 4"))
         << q;
   }
 }

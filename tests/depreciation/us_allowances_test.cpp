@@ -27,8 +27,8 @@ void expect_deductions(const std::vector<Money>& actual, const std::vector<Money
 // Basis 10000, E = 2000, b = 0.5: year 1 takes 2000 + 0.5 x 8000 = 6000, and 5-year MACRS
 // (Table A-1: 20, 32, 19.2, 11.52, 11.52, 5.76 %) depreciates the remaining 4000.
 TEST(UsAllowances, Section179ThenBonusThenTheMethod) {
-  const auto method = make_method(MacrsSpec{5, MacrsConvention::half_year, std::nullopt,
-                                            {2000.0, 0.5}});
+  const auto method =
+      make_method(MacrsSpec{5, MacrsConvention::half_year, std::nullopt, {2000.0, 0.5}});
   EXPECT_EQ(method->name(), "macrs");
   expect_deductions(method->deductions(10000), {6000 + 800, 1280, 768, 460.8, 460.8, 230.4});
 }
@@ -40,9 +40,9 @@ TEST(UsAllowances, BonusAloneOnAds) {
 }
 
 TEST(UsAllowances, FullBonusDeductsTheWholeBasisInYearOne) {
-  const Schedule s(*make_method(MacrsSpec{7, MacrsConvention::half_year, std::nullopt,
-                                          {std::nullopt, 1.0}}),
-                   50000);
+  const Schedule s(
+      *make_method(MacrsSpec{7, MacrsConvention::half_year, std::nullopt, {std::nullopt, 1.0}}),
+      50000);
   EXPECT_NEAR(s.deduction(1), 50000, kMoneyTolerance);
   EXPECT_NEAR(s.book_value(1), 0, kMoneyTolerance);
   EXPECT_NEAR(s.deduction_if_sold(1), 50000, kMoneyTolerance);
@@ -52,9 +52,8 @@ TEST(UsAllowances, FullBonusDeductsTheWholeBasisInYearOne) {
 // Rule (4): a sale in year 1 or later keeps the expensed amounts; MACRS's half year applies to
 // its own part. Basis 10000, E = 2000, b = 0.5: MACRS on 4000.
 TEST(UsAllowances, DisposalYearRuleAppliesToTheMethodsPartOnly) {
-  const Schedule s(*make_method(MacrsSpec{5, MacrsConvention::half_year, std::nullopt,
-                                          {2000.0, 0.5}}),
-                   10000);
+  const Schedule s(
+      *make_method(MacrsSpec{5, MacrsConvention::half_year, std::nullopt, {2000.0, 0.5}}), 10000);
   EXPECT_NEAR(s.deduction_if_sold(1), 6000 + 400, kMoneyTolerance);
   EXPECT_NEAR(s.book_value_if_sold(1), 3600, kMoneyTolerance);
   EXPECT_NEAR(s.deduction_if_sold(3), 384, kMoneyTolerance);
@@ -63,11 +62,17 @@ TEST(UsAllowances, DisposalYearRuleAppliesToTheMethodsPartOnly) {
 
 TEST(UsAllowances, Checks) {
   const auto macrs = make_method(MacrsSpec{5});
-  EXPECT_TRUE(throws_input_error([&] { UsAllowancesFirst m(macrs, {-1.0, std::nullopt}); },
-                                 "section_179", "must be >= 0"));
+  EXPECT_TRUE(throws_input_error(
+      [&] {
+        UsAllowancesFirst m(macrs, {-1.0, std::nullopt});
+      },
+      "section_179", "must be >= 0"));
   for (double b : {-0.1, 1.01}) {
-    EXPECT_TRUE(throws_input_error([&] { UsAllowancesFirst m(macrs, {std::nullopt, b}); }, "bonus",
-                                   "must be between 0 and 1"))
+    EXPECT_TRUE(throws_input_error(
+        [&] {
+          UsAllowancesFirst m(macrs, {std::nullopt, b});
+        },
+        "bonus", "must be between 0 and 1"))
         << b;
   }
   const UsAllowancesFirst too_much(macrs, {12000.0, std::nullopt});

@@ -40,14 +40,14 @@ TEST(FullBonusAfterTax, ChallengerEuacIsTheClosedForm) {
   const double i = 0.08;
   const auto rates = tax::Rates::make(0.11, t, i);
   const depreciation::Spec specs[] = {
-      depreciation::MacrsSpec{7, depreciation::MacrsConvention::half_year, std::nullopt,
-                              {std::nullopt, 1.0}},
-      depreciation::MacrsSpec{5, depreciation::MacrsConvention::mid_quarter, 4,
-                              {std::nullopt, 1.0}},
+      depreciation::MacrsSpec{
+          7, depreciation::MacrsConvention::half_year, std::nullopt, {std::nullopt, 1.0}},
+      depreciation::MacrsSpec{
+          5, depreciation::MacrsConvention::mid_quarter, 4, {std::nullopt, 1.0}},
       depreciation::MacrsAdsSpec{10, {std::nullopt, 1.0}},
       // 179 on part, the allowance on all the rest: again the whole price in year 1.
-      depreciation::MacrsSpec{7, depreciation::MacrsConvention::half_year, std::nullopt,
-                              {25000.0, 1.0}},
+      depreciation::MacrsSpec{
+          7, depreciation::MacrsConvention::half_year, std::nullopt, {25000.0, 1.0}},
   };
   for (const depreciation::Spec& spec : specs) {
     const Ownership unit{price, 0, price, costs, values, depreciation::make_method(spec)};
@@ -67,8 +67,8 @@ TEST(FullBonusAfterTax, PlainMacrsCostsMore) {
   const std::vector<double> costs = {5000, 6500, 8000};
   const std::vector<double> values = {42000, 33000, 26000};
   const auto rates = tax::Rates::make(0.11, 0.25, 0.08);
-  const Ownership plain{60000, 0, 60000, costs, values,
-                        depreciation::make_method(depreciation::MacrsSpec{7})};
+  const Ownership plain{60000, 0,      60000,
+                        costs, values, depreciation::make_method(depreciation::MacrsSpec{7})};
   const KeepingCosts kept = after_tax_keeping_costs(plain, rates);
   const double one_year = closed_form_euac(60000, 0.25, 0.08, costs, values, 1);
   EXPECT_NEAR(kept.euac(1), one_year, kRelativeTolerance * one_year);
