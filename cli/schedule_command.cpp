@@ -28,6 +28,10 @@ const std::map<std::string, std::string, std::less<>> kOptionForParameter = {
     {"rate", "--rate"},
     {"switch_to_straight_line", "--switch/--no-switch"},
     {"disposal_year", "--dispose-in-year"},
+    {"section_179", "--section-179"},
+    {"bonus", "--bonus"},
+    {"convention", "--convention"},
+    {"quarter", "--quarter"},
 };
 
 std::string option_for(std::string_view parameter) {
@@ -44,6 +48,10 @@ struct ScheduleOptions {
   bool switch_to_straight_line = false;  // --switch
   bool no_switch = false;                // --no-switch; excludes --switch
   double dispose_in_year = 0;
+  double section_179 = 0;
+  double bonus = 0;
+  std::string convention;
+  double quarter = 0;
   std::string format = "text";
   // Which of the optional parameters were given.
   CLI::Option* salvage_given = nullptr;
@@ -52,6 +60,10 @@ struct ScheduleOptions {
   CLI::Option* switch_given = nullptr;
   CLI::Option* no_switch_given = nullptr;
   CLI::Option* dispose_given = nullptr;
+  CLI::Option* section_179_given = nullptr;
+  CLI::Option* bonus_given = nullptr;
+  CLI::Option* convention_given = nullptr;
+  CLI::Option* quarter_given = nullptr;
 };
 
 template <class T>
@@ -67,7 +79,11 @@ formats::FlatDepreciation flat_parameters(const ScheduleOptions& o) {
           .rate = if_given(o.rate_given->count() > 0, o.rate),
           .switch_to_straight_line = if_given(
               o.switch_given->count() + o.no_switch_given->count() > 0, o.switch_to_straight_line),
-          .disposal_year = if_given(o.dispose_given->count() > 0, o.dispose_in_year)};
+          .disposal_year = if_given(o.dispose_given->count() > 0, o.dispose_in_year),
+          .section_179 = if_given(o.section_179_given->count() > 0, o.section_179),
+          .bonus = if_given(o.bonus_given->count() > 0, o.bonus),
+          .convention = if_given(o.convention_given->count() > 0, o.convention),
+          .quarter = if_given(o.quarter_given->count() > 0, o.quarter)};
 }
 
 // The command line's words for a parameter that does not fit the method: an option the method
@@ -128,6 +144,27 @@ void add_schedule_command(CLI::App& app, const Console& console) {
   o->dispose_given =
       command->add_option("--dispose-in-year", o->dispose_in_year, "sold at the end of this year")
           ->type_name("YEAR");
+  o->section_179_given =
+      command
+          ->add_option("--section-179", o->section_179,
+                       "macrs, macrs_ads: section 179 amount expensed in year 1, 0..basis")
+          ->type_name("AMOUNT");
+  o->bonus_given =
+      command
+          ->add_option("--bonus", o->bonus,
+                       "macrs, macrs_ads: special depreciation allowance, a fraction 0..1 of the "
+                       "basis less the 179 amount, in year 1")
+          ->type_name("FRACTION");
+  o->convention_given =
+      command
+          ->add_option("--convention", o->convention,
+                       "macrs: half_year (the default) or mid_quarter")
+          ->type_name("CONVENTION");
+  o->quarter_given =
+      command
+          ->add_option("--quarter", o->quarter,
+                       "macrs with --convention mid_quarter: quarter placed in service, 1..4")
+          ->type_name("QUARTER");
   add_format_option(*command, o->format, {"text", "json"},
                     "a table for people (the default) or JSON");
   command->footer(
@@ -135,14 +172,23 @@ void add_schedule_command(CLI::App& app, const Console& console) {
       "  straight_line, sum_of_years_digits   --life, --salvage\n"
       "  declining_balance                    --life, --rate, --salvage, --switch or --no-switch\n"
       "  macrs                                --life (recovery period 3, 5, 7, 10, 15 or 20;\n"
-      "                                       GDS, half-year convention)\n"
+      "                                       GDS); optional --convention mid_quarter with\n"
+      "                                       --quarter, --section-179, --bonus\n"
+      "  macrs_ads                            --life (ADS recovery period, straight line,\n"
+      "                                       half-year convention); optional --section-179,\n"
+      "                                       --bonus\n"
       "  none                                 nothing\n"
       "macrs and none recover the whole basis: they accept --salvage 0 and refuse others.\n"
       "With --dispose-in-year Y the rows stop at Y, and year Y takes the disposal-year\n"
-      "deduction: half a year for macrs before its last table year, a full year otherwise.\n"
+      "deduction: half a year for macrs and macrs_ads before the last year ((q - 0.5) / 4\n"
+      "under mid_quarter), a full year otherwise; the 179 amount and the bonus stay whole.\n"
+      "Tax rules change by year and jurisdiction: the amounts are yours to check with a\n"
+      "qualified professional.\n"
       "\n"
       "Examples:\n"
       "  tenure schedule --method macrs --life 5 --basis 52000\n"
+      "  tenure schedule --method macrs --life 7 --convention mid_quarter --quarter 4 \\\n"
+      "                  --section-179 10000 --bonus 0.4 --basis 52000\n"
       "  tenure schedule --method straight_line --life 5 --salvage 2000 --basis 12000\n"
       "  tenure schedule --method declining_balance --life 5 --rate 2 --salvage 0 --switch \\\n"
       "                  --basis 10000 --dispose-in-year 3 --format json");

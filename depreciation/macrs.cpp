@@ -32,10 +32,18 @@ TableLayout layout_for(Years recovery_years) {
 // num / den rounded half up, for num >= 0 and den > 0.
 Units round_half_up(Units num, Units den) { return (2 * num + den) / (2 * den); }
 
+// Rule (2): eighths of a year depreciated in year 1: 4 (half-year), 9 - 2q (mid-quarter).
+Units first_year_eighths(std::optional<int> quarter) {
+  if (!quarter) return 4;
+  if (*quarter < 1 || *quarter > 4) throw InputError("quarter", "must be 1, 2, 3 or 4");
+  return 9 - 2 * *quarter;
+}
+
 }  // namespace
 
-std::vector<double> macrs_percentages(Years recovery_years) {
+std::vector<double> macrs_percentages(Years recovery_years, std::optional<int> quarter) {
   const TableLayout table = layout_for(recovery_years);
+  const Units first = first_year_eighths(quarter);
   const Units r = recovery_years;
   std::vector<double> result;
   result.reserve(static_cast<std::size_t>(r + 1));
@@ -44,12 +52,13 @@ std::vector<double> macrs_percentages(Years recovery_years) {
     result.push_back(static_cast<double>(units) / table.per_percent);
     remaining -= units;
   };
-  // Rule (2): half of the declining-balance rate in year 1.
-  take(round_half_up(remaining * table.rate_num, 2 * table.rate_den * r));
+  // Rule (2): `first` eighths of a year of the declining-balance rate in year 1.
+  take(round_half_up(remaining * table.rate_num * first, 8 * table.rate_den * r));
   for (Units k = 2; k <= r; ++k) {
     const Units declining = round_half_up(remaining * table.rate_num, table.rate_den * r);
-    // Straight line over the remaining life of R - k + 1.5 years, kept in halves.
-    const Units straight = round_half_up(2 * remaining, 2 * (r - k) + 3);
+    // Straight line over the remaining life, R years less the first year's part and k - 2
+    // whole years, kept in eighths (R - k + 1.5 years under the half-year convention).
+    const Units straight = round_half_up(8 * remaining, 8 * (r - k + 2) - first);
     // Rounding is monotone, so rounding each and taking the larger is rounding the larger.
     take(std::max(declining, straight));
   }
@@ -57,8 +66,23 @@ std::vector<double> macrs_percentages(Years recovery_years) {
   return result;
 }
 
+namespace {
+
+std::optional<int> checked_quarter(const MacrsSpec& spec) {
+  if (spec.convention == MacrsConvention::half_year) {
+    if (spec.quarter) throw InputError("quarter", "applies only to the mid_quarter convention");
+    return std::nullopt;
+  }
+  if (!spec.quarter) throw InputError("quarter", "is required with the mid_quarter convention");
+  return spec.quarter;
+}
+
+}  // namespace
+
 Macrs::Macrs(MacrsSpec spec)
-    : recovery_years_(spec.recovery_years), percentages_(macrs_percentages(spec.recovery_years)) {}
+    : recovery_years_(spec.recovery_years),
+      quarter_(checked_quarter(spec)),
+      percentages_(macrs_percentages(spec.recovery_years, quarter_)) {}
 
 std::vector<Money> Macrs::deductions(Money basis) const {
   std::vector<Money> result;
@@ -68,7 +92,8 @@ std::vector<Money> Macrs::deductions(Money basis) const {
 }
 
 double Macrs::disposal_year_fraction(Years year) const {
-  return year < recovery_years_ + 1 ? 0.5 : 1.0;
+  if (year >= recovery_years_ + 1) return 1.0;
+  return quarter_ ? (*quarter_ - 0.5) / 4.0 : 0.5;
 }
 
 }  // namespace tenure::depreciation

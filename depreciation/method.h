@@ -9,6 +9,7 @@
 //   sl->deductions(11000);   // {2000, 2000, 2000, 2000, 2000}
 #pragma once
 
+#include <cstddef>
 #include <memory>
 #include <optional>
 #include <string_view>
@@ -31,6 +32,16 @@ class Method {
   virtual double disposal_year_fraction(Years year) const {
     (void)year;
     return 1.0;
+  }
+  // For each year k = 1..n of deductions(basis): the deduction taken in year k when the asset is
+  // sold at its end. The rule of disposal_year_fraction, unless a method takes part of a year's
+  // deduction whatever happens (first-year expensing, us_allowances.h).
+  virtual std::vector<Money> deductions_if_sold(Money basis) const {
+    std::vector<Money> result = deductions(basis);
+    for (std::size_t k = 0; k < result.size(); ++k) {
+      result[k] *= disposal_year_fraction(static_cast<Years>(k + 1));
+    }
+    return result;
   }
   // The book value its deductions never go below: a book method's salvage; 0 for MACRS and none.
   virtual Money salvage() const { return 0; }
@@ -61,8 +72,24 @@ struct SumOfYearsDigitsSpec {
   Years life_years;
   Money salvage;
 };
+// US first-year expensing on a US method (SPEC 13, IRS Publication 946 order): the section 179
+// amount first, then the special depreciation allowance `bonus` (0..1) of the rest, both in
+// year 1; the method depreciates what remains. Absent fields expense nothing.
+struct UsAllowances {
+  std::optional<Money> section_179 = std::nullopt;  // 0 <= amount <= basis
+  std::optional<Rate> bonus = std::nullopt;         // 0 <= fraction <= 1
+  bool any() const { return section_179.has_value() || bonus.has_value(); }
+};
+enum class MacrsConvention { half_year, mid_quarter };
 struct MacrsSpec {
-  Years recovery_years;  // 3, 5, 7, 10, 15 or 20 (GDS, half-year convention)
+  Years recovery_years;  // 3, 5, 7, 10, 15 or 20 (GDS)
+  MacrsConvention convention = MacrsConvention::half_year;
+  std::optional<int> quarter = std::nullopt;  // 1..4, quarter placed in service: mid_quarter
+  UsAllowances allowances = {};
+};
+struct MacrsAdsSpec {
+  Years recovery_years;  // L >= 1: straight line over L years, half-year convention
+  UsAllowances allowances = {};
 };
 struct NoDepreciationSpec {};
 struct PoolSpec {
@@ -72,9 +99,13 @@ struct PoolSpec {
 };
 
 using Spec = std::variant<StraightLineSpec, DecliningBalanceSpec, SumOfYearsDigitsSpec, MacrsSpec,
-                          NoDepreciationSpec, PoolSpec>;
+                          NoDepreciationSpec, PoolSpec, MacrsAdsSpec>;
 
-// Builds the method a spec describes; throws InputError for out-of-range parameters.
+// The section 179 amount of a US spec (macrs, macrs_ads), nullopt when it has none.
+std::optional<Money> section_179_of(const Spec& spec);
+
+// Builds the method a spec describes, a US method's allowances around it (us_allowances.h);
+// throws InputError for out-of-range parameters.
 std::shared_ptr<const Method> make_method(const Spec& spec);
 
 }  // namespace tenure::depreciation

@@ -14,7 +14,7 @@ Schedule::Schedule(const Method& method, Money basis)
     : basis_(basis), pool_rate_(method.pool_rate()) {
   require_positive(basis_, "basis");
   deductions_ = method.deductions(basis_);
-  disposal_fractions_.reserve(deductions_.size());
+  sold_deductions_ = method.deductions_if_sold(basis_);
   book_values_.reserve(deductions_.size() + 1);
   book_values_.push_back(basis_);
   // Sums of rounded deductions can end a few ulps below the salvage (or below 0 for MACRS): the
@@ -23,7 +23,6 @@ Schedule::Schedule(const Method& method, Money basis)
   const Money floor = floor_;
   Money deducted = 0;
   for (std::size_t k = 0; k < deductions_.size(); ++k) {
-    disposal_fractions_.push_back(method.disposal_year_fraction(static_cast<Years>(k + 1)));
     deducted += deductions_[k];
     Money book_value = basis_ - deducted;
     if (book_value < floor) {
@@ -32,6 +31,7 @@ Schedule::Schedule(const Method& method, Money basis)
       book_value = floor;
     }
     book_values_.push_back(book_value);
+    sold_deductions_[k] = std::min(sold_deductions_[k], deductions_[k]);
   }
 }
 
@@ -52,14 +52,14 @@ Money Schedule::book_value(Years year) const {
 Money Schedule::deduction_if_sold(Years year) const {
   if (year < 1) return 0;
   if (year > years()) return deduction(year);  // nothing, or a pool's full year
-  const auto index = static_cast<std::size_t>(year - 1);
-  return deductions_[index] * disposal_fractions_[index];
+  return sold_deductions_[static_cast<std::size_t>(year - 1)];
 }
 
 Money Schedule::book_value_if_sold(Years year) const {
   if (year < 0) throw InputError("year", "must be >= 0");
   if (year == 0) return basis_;
-  if (year > years() || disposal_fractions_[static_cast<std::size_t>(year - 1)] == 1.0) {
+  const auto index = static_cast<std::size_t>(year - 1);
+  if (year > years() || sold_deductions_[index] == deductions_[index]) {
     return book_value(year);  // a full year's deduction: the same as kept
   }
   return std::max(floor_, book_value(year - 1) - deduction_if_sold(year));

@@ -55,7 +55,7 @@ class Schedule {
  private:
   Money basis_;
   std::vector<Money> deductions_;
-  std::vector<double> disposal_fractions_;  // per schedule year
+  std::vector<Money> sold_deductions_;      // per schedule year: deduction_if_sold
   std::vector<Money> book_values_;          // index = year, 0..years()
   Money floor_ = 0;                         // the method's salvage: no book value is below it
   std::optional<Rate> pool_rate_;           // a pool's rate: its tail past years()

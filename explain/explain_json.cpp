@@ -7,6 +7,7 @@
 #include "formats/at_stake_output.h"
 #include "formats/caution.h"
 #include "formats/depreciation_json.h"
+#include "formats/tax_rules_text.h"
 #include "interest/factors.h"
 
 namespace tenure::explain {
@@ -215,6 +216,8 @@ json explanation_to_json(const Explanation& e) {
     out["equivalent_case"] = equivalent_case(e);
   }
   out["verdict"] = verdict(e);
+  out["tax_rules"] = {{"used", formats::tax_rules_sentence(e.model.policy->depreciation)},
+                      {"caution", formats::kTaxRulesCaution}};
   out["caution"] = formats::kCaution;
   return out;
 }

@@ -11,6 +11,7 @@
 #include "explain/text_sections.h"
 #include "formats/caution.h"
 #include "formats/depreciation_json.h"
+#include "formats/tax_rules_text.h"
 #include "formats/text_table.h"
 #include "review/verdict_reasons.h"
 
@@ -326,6 +327,12 @@ std::string explanation_to_text(const Explanation& e) {
   }
   sections.push_back(text::verdict_rule(e));
   if (e.review.at_stake) sections.push_back(text::at_stake(e));
+  sections.push_back(
+      formats::wrap_words(fmt::format("Tax rules used (class {}): {}.", e.stored.asset_class,
+                                      formats::tax_rules_sentence(e.model.policy->depreciation)),
+                          formats::kLineWidth, "", "  ") +
+      formats::wrap_words(fmt::format("Note: {}.", formats::kTaxRulesCaution), formats::kLineWidth,
+                          "", "  "));
   sections.push_back(std::string(formats::kCaution) + "\n");
   return fmt::format("{}", fmt::join(sections, "\n"));
 }

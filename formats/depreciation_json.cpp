@@ -14,6 +14,34 @@ using namespace tenure::depreciation;
 
 Years life(const JsonObject& o) { return o.whole_number("life_years", 1); }
 
+// The US first-year fields (SPEC 13), on macrs and macrs_ads only.
+constexpr std::string_view kUsOnlyFields[] = {"section_179", "bonus"};
+// The MACRS convention fields, on macrs only.
+constexpr std::string_view kMacrsOnlyFields[] = {"convention", "quarter"};
+
+UsAllowances allowances(const JsonObject& o) {
+  return UsAllowances{o.optional_number("section_179"), o.optional_number("bonus")};
+}
+
+MacrsConvention convention(const JsonObject& o) {
+  if (!o.has("convention")) return MacrsConvention::half_year;
+  const std::string name = o.string("convention");
+  if (name == "half_year") return MacrsConvention::half_year;
+  if (name == "mid_quarter") return MacrsConvention::mid_quarter;
+  throw InputError(o.path_of("convention"),
+                   fmt::format("unknown convention '{}' (expected half_year or mid_quarter)",
+                               name));
+}
+
+const char* convention_name(MacrsConvention convention) {
+  return convention == MacrsConvention::mid_quarter ? "mid_quarter" : "half_year";
+}
+
+void write_allowances(const UsAllowances& a, nlohmann::json& out) {
+  if (a.section_179) out["section_179"] = *a.section_179;
+  if (a.bonus) out["bonus"] = *a.bonus;
+}
+
 const std::vector<DepreciationForm> kForms = {
     {"straight_line",
      {"life_years", "salvage"},
@@ -32,8 +60,16 @@ const std::vector<DepreciationForm> kForms = {
        return SumOfYearsDigitsSpec{life(o), o.number("salvage")};
      }},
     {"macrs",
-     {"recovery_years"},
-     [](const JsonObject& o) -> Spec { return MacrsSpec{o.whole_number("recovery_years", 1)}; }},
+     {"recovery_years", "convention", "quarter", "section_179", "bonus"},
+     [](const JsonObject& o) -> Spec {
+       return MacrsSpec{o.whole_number("recovery_years", 1), convention(o),
+                        o.optional_whole_number("quarter", 1, 4), allowances(o)};
+     }},
+    {"macrs_ads",
+     {"recovery_years", "section_179", "bonus"},
+     [](const JsonObject& o) -> Spec {
+       return MacrsAdsSpec{o.whole_number("recovery_years", 1), allowances(o)};
+     }},
     {"none", {}, [](const JsonObject&) -> Spec { return NoDepreciationSpec{}; }},
     {"pool",
      {"rate", "half_year_rule", "first_year_allowance"},
@@ -59,7 +95,18 @@ struct SpecWriter {
         {"method", "sum_of_years_digits"}, {"life_years", s.life_years}, {"salvage", s.salvage}};
   }
   nlohmann::json operator()(const MacrsSpec& s) const {
-    return {{"method", "macrs"}, {"recovery_years", s.recovery_years}};
+    nlohmann::json out = {{"method", "macrs"}, {"recovery_years", s.recovery_years}};
+    if (s.convention != MacrsConvention::half_year) {
+      out["convention"] = convention_name(s.convention);
+    }
+    if (s.quarter) out["quarter"] = *s.quarter;
+    write_allowances(s.allowances, out);
+    return out;
+  }
+  nlohmann::json operator()(const MacrsAdsSpec& s) const {
+    nlohmann::json out = {{"method", "macrs_ads"}, {"recovery_years", s.recovery_years}};
+    write_allowances(s.allowances, out);
+    return out;
   }
   nlohmann::json operator()(const NoDepreciationSpec&) const { return {{"method", "none"}}; }
   nlohmann::json operator()(const PoolSpec& s) const {
@@ -94,6 +141,20 @@ Spec read_depreciation(const JsonObject& object) {
     throw InputError(object.path_of("method"),
                      fmt::format("unknown method '{}' (expected one of {})", method,
                                  depreciation_method_names()));
+  }
+  // A US field on another method is refused by name, before the list of the method's keys.
+  for (std::string_view field : kUsOnlyFields) {
+    if (object.has(field) && method != "macrs" && method != "macrs_ads") {
+      throw InputError(object.path_of(field),
+                       fmt::format("applies only to the US methods macrs and macrs_ads, not {}",
+                                   method));
+    }
+  }
+  for (std::string_view field : kMacrsOnlyFields) {
+    if (object.has(field) && method != "macrs") {
+      throw InputError(object.path_of(field),
+                       fmt::format("applies only to the macrs method, not {}", method));
+    }
   }
   std::vector<std::string_view> keys{"method"};
   keys.insert(keys.end(), form->fields.begin(), form->fields.end());

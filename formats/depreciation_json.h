@@ -1,12 +1,16 @@
-// The depreciation object of a case or policy file (SPEC 5), read into a depreciation::Spec and
-// written back. Every field a method lists is required, but a pool's first_year_allowance
-// (absent: none); there are no silent defaults.
+// The depreciation object of a case or policy file (SPEC 5, 13), read into a depreciation::Spec
+// and written back. Every field a method lists is required, but a pool's first_year_allowance
+// (absent: none), a US method's section_179 and bonus (absent: nothing expensed) and macrs's
+// convention (absent: half_year, as before SPEC 13) and quarter (mid_quarter only).
 //
 //   {"method": "straight_line", "life_years": 5, "salvage": 0}
 //   {"method": "declining_balance", "life_years": 5, "rate": 2.0, "salvage": 0,
 //    "switch_to_straight_line": true}
 //   {"method": "sum_of_years_digits", "life_years": 5, "salvage": 0}
 //   {"method": "macrs", "recovery_years": 5}
+//   {"method": "macrs", "recovery_years": 7, "convention": "mid_quarter", "quarter": 4,
+//    "section_179": 20000, "bonus": 0.4}
+//   {"method": "macrs_ads", "recovery_years": 9}
 //   {"method": "none"}
 //   {"method": "pool", "rate": 0.30, "half_year_rule": true}        // CCA class 10 (Canada)
 //   {"method": "pool", "rate": 0.18, "half_year_rule": false, "first_year_allowance": 0.40}
@@ -29,7 +33,7 @@
 namespace tenure::formats {
 
 // One accepted form of the depreciation object: the method's name and its fields (all
-// required but a pool's first_year_allowance).
+// required but the optional ones named at the top of this file).
 struct DepreciationForm {
   std::string_view method;
   std::vector<std::string_view> fields;
@@ -43,7 +47,7 @@ const std::vector<DepreciationForm>& depreciation_forms();
 const DepreciationForm* find_depreciation_form(std::string_view method);
 
 // The names of depreciation_forms() in their order, for messages and help texts:
-// "straight_line, declining_balance, sum_of_years_digits, macrs, none, pool".
+// "straight_line, declining_balance, sum_of_years_digits, macrs, macrs_ads, none, pool".
 std::string depreciation_method_names();
 
 // Reads a depreciation object. Checks types, unknown and missing fields, and whole years; the

@@ -19,6 +19,7 @@ struct MethodParameter {
   std::string_view name;
   std::vector<std::string_view> fields;  // life sets life_years or, for macrs, recovery_years
   std::optional<nlohmann::json> (*value)(const FlatDepreciation& flat);
+  bool optional = false;  // rule (2a): may be left out for the methods that take it
 };
 
 template <class T>
@@ -37,6 +38,16 @@ const std::vector<MethodParameter> kMethodParameters = {
     {"switch_to_straight_line",
      {"switch_to_straight_line"},
      [](const FlatDepreciation& f) { return as_json(f.switch_to_straight_line); }},
+    {"section_179",
+     {"section_179"},
+     [](const FlatDepreciation& f) { return as_json(f.section_179); },
+     true},
+    {"bonus", {"bonus"}, [](const FlatDepreciation& f) { return as_json(f.bonus); }, true},
+    {"convention",
+     {"convention"},
+     [](const FlatDepreciation& f) { return as_json(f.convention); },
+     true},
+    {"quarter", {"quarter"}, [](const FlatDepreciation& f) { return as_json(f.quarter); }, true},
 };
 
 bool sets(const MethodParameter& parameter, std::string_view field) {
@@ -72,6 +83,7 @@ nlohmann::json depreciation_object(const FlatDepreciation& flat, const Depreciat
     const auto field = std::find_if(form.fields.begin(), form.fields.end(),
                                     [&](std::string_view f) { return sets(parameter, f); });
     if (field != form.fields.end()) {
+      if (!value && parameter.optional) continue;  // rule (2a)
       if (!value) throw refusals.missing(parameter.name, flat.method);
       object[std::string(*field)] = *value;
     } else if (value && !(parameter.name == "salvage" && flat.salvage == 0.0)) {  // rule (3)

@@ -16,7 +16,9 @@
 //   (2) A parameter the method takes must be given; refusals.missing says so. basis is taken by
 //       every method; straight_line and sum_of_years_digits take life and salvage;
 //       declining_balance life, rate, salvage and switch_to_straight_line; macrs life (its
-//       recovery period); none nothing more.
+//       recovery period); macrs_ads life (its ADS recovery period); none nothing more.
+//   (2a) The optional parameters may be left out: section_179 and bonus (macrs, macrs_ads),
+//       convention and quarter (macrs), as the optional fields of a case file.
 //   (3) A parameter the method does not take must not be given; refusals.unused says so. A
 //       salvage of 0 counts as not given: macrs and none recover the whole basis, so a zero
 //       salvage says nothing they would ignore.
@@ -29,7 +31,8 @@
 //       accepts, read by read_depreciation. Beside it only basis and disposal_year may be
 //       given; any other parameter "must not be given when the method is a depreciation object
 //       (put it in the object)". The object's errors are at its JSON paths ("$.recovery_years").
-// Rules (2) and (3) are checked parameter by parameter in the order of FlatDepreciation.
+// Rules (2) and (3) are checked parameter by parameter in the order of FlatDepreciation, the
+// optional ones after the others: section_179, bonus, convention, quarter.
 #pragma once
 
 #include <functional>
@@ -54,6 +57,11 @@ struct FlatDepreciation {
   std::optional<double> rate = std::nullopt;  // multiple of the straight-line rate (2 = double)
   std::optional<bool> switch_to_straight_line = std::nullopt;
   std::optional<double> disposal_year = std::nullopt;  // sold at the end of this year
+  // The US fields (SPEC 13), each optional for the methods that take it (rule 2a).
+  std::optional<Money> section_179 = std::nullopt;     // macrs, macrs_ads
+  std::optional<double> bonus = std::nullopt;          // macrs, macrs_ads: fraction 0..1
+  std::optional<std::string> convention = std::nullopt;  // macrs: half_year or mid_quarter
+  std::optional<double> quarter = std::nullopt;        // macrs, mid_quarter: 1..4
 };
 
 // How the caller refuses a parameter that does not fit the method (rules 2 and 3). The command

@@ -47,6 +47,12 @@ formats::FlatSchedule schedule_from(const Arguments& args) {
   if (args.signature().position("dispose_in_year")) {
     flat.disposal_year = args.optional_number("dispose_in_year");
   }
+  if (args.signature().position("section_179")) {
+    flat.section_179 = args.optional_number("section_179");
+    flat.bonus = args.optional_number("bonus");
+    flat.convention = args.optional_text("convention");
+    flat.quarter = args.optional_number("quarter");
+  }
   try {
     return formats::flat_schedule(flat, sql_refusals(args));
   } catch (const InputError& error) {

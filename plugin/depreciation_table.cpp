@@ -1,7 +1,7 @@
 // tenure_depreciation(method, basis, salvage, life[, rate, switch_to_straight_line,
-// dispose_in_year]): a depreciation schedule as rows, one per year, in year order. A table-valued
-// function: an eponymous-only virtual table whose arguments are HIDDEN columns, as SQLite's
-// generate_series(start, stop, step).
+// dispose_in_year, section_179, bonus, convention, quarter]): a depreciation schedule as rows,
+// one per year, in year order. A table-valued function: an eponymous-only virtual table whose
+// arguments are HIDDEN columns, as SQLite's generate_series(start, stop, step).
 //
 // Usage:
 //   SELECT * FROM tenure_depreciation('macrs', 10000, 0, 5);   -- year|depreciation|book_value
@@ -23,10 +23,16 @@
 //     -- 15000.0
 //   SELECT * FROM tenure_depreciation('{"method": "macrs", "recovery_years": 5}', 10000);
 //     -- the method as a case file's depreciation object: the same six rows as the first call
+//   SELECT * FROM tenure_depreciation('macrs', 10000, 0, 5, NULL, NULL, NULL, 1000, 0.5);
+//     -- section 179 of 1000, then a 50% special allowance on 9000: year 1 5500 + 20% of 4500
+//   SELECT * FROM tenure_depreciation('macrs', 10000, 0, 5, NULL, NULL, NULL, NULL, NULL,
+//                                     'mid_quarter', 4);   -- Pub 946 Table A-5: 500, 3800, ...
+//   SELECT * FROM tenure_depreciation('macrs_ads', 10000, 0, 5);   -- 1000, 2000 x 4, 1000
 //
 // Columns: year (INTEGER, 1..), depreciation (REAL, the year's deduction), book_value (REAL, at
 // the year's end), then the hidden inputs method, basis, salvage, life, rate,
-// switch_to_straight_line, dispose_in_year, which read back as given (NULL when left out).
+// switch_to_straight_line, dispose_in_year, section_179, bonus, convention, quarter, which read
+// back as given (NULL when left out).
 // The method's arguments and their rules are in depreciation_arguments.h: for 'macrs', life is
 // the recovery period (3, 5, 7, 10, 15, 20) and salvage must be 0 or NULL; rate and
 // switch_to_straight_line are for 'declining_balance' only. Without dispose_in_year the rows
@@ -53,11 +59,12 @@ namespace {
 
 // The columns: the rows' values, then the hidden inputs, in argument order.
 enum Column : int { kYearColumn, kDepreciationColumn, kBookValueColumn, kFirstInputColumn };
-constexpr int kInputCount = 7;
+constexpr int kInputCount = 11;
 
 const Signature kDepreciation{"tenure_depreciation",
                               {"method", "basis", "salvage", "life", "rate",
-                               "switch_to_straight_line", "dispose_in_year"},
+                               "switch_to_straight_line", "dispose_in_year", "section_179",
+                               "bonus", "convention", "quarter"},
                               kDepreciationAliases};
 
 struct ValueFree {
@@ -76,7 +83,8 @@ int connect_table(sqlite3* db, void*, int, const char* const*, sqlite3_vtab** ta
       db,
       "CREATE TABLE x(year INTEGER, depreciation REAL, book_value REAL, method HIDDEN, "
       "basis HIDDEN, salvage HIDDEN, life HIDDEN, rate HIDDEN, "
-      "switch_to_straight_line HIDDEN, dispose_in_year HIDDEN)");
+      "switch_to_straight_line HIDDEN, dispose_in_year HIDDEN, section_179 HIDDEN, "
+      "bonus HIDDEN, convention HIDDEN, quarter HIDDEN)");
   if (rc != SQLITE_OK) return rc;
   *table = new (std::nothrow) sqlite3_vtab{};
   if (*table == nullptr) return SQLITE_NOMEM;
@@ -90,7 +98,8 @@ int disconnect_table(sqlite3_vtab* table) {
 
 // The plan: every hidden input with a usable `=` constraint is passed to xFilter. idxNum has
 // bit k set when input k (0 method, 1 basis, 2 salvage, 3 life, 4 rate,
-// 5 switch_to_straight_line, 6 dispose_in_year) is passed, and xFilter receives the passed
+// 5 switch_to_straight_line, 6 dispose_in_year, 7 section_179, 8 bonus, 9 convention,
+// 10 quarter) is passed, and xFilter receives the passed
 // inputs in that order (argvIndex 1, 2, ... in input order, skipping those not passed). A
 // missing input is not refused here but in xFilter, which names it; an input whose constraint
 // is not usable in this plan (its value comes from a table joined later) makes the plan

@@ -7,6 +7,7 @@
 #include <fmt/format.h>
 
 #include "explain/esl_words.h"
+#include "formats/tax_rules_text.h"
 #include "formats/text_table.h"
 #include "report/html.h"
 #include "report/page_model.h"
@@ -128,6 +129,12 @@ std::string class_sections(const PageModel& m) {
           escape(explain::esl_sentence(c, m.data->run.basis, m.policy->esl_band)));
     }
     if (c.note) out += "<p class=\"warn\">" + escape(*c.note) + "</p>";
+    if (const auto policy = m.policy->classes.find(c.asset_class);
+        policy != m.policy->classes.end()) {
+      out += fmt::format("<p class=\"tax-rules\">Tax rules used: {}; {}.</p>",
+                         escape(formats::tax_rules_sentence(policy->second.depreciation)),
+                         escape(std::string(formats::kTaxRulesCaution)));
+    }
     const std::string band_caption =
         c.esl_band_low
             ? fmt::format(

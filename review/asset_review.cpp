@@ -51,7 +51,12 @@ replacement::Ownership defender_ownership(const ClassModel& model, Money first_c
   own.first_cost = first_cost;
   own.age_years = age;
   own.value_now = market_value_now;
-  own.depreciation = model.depreciation;
+  // SPEC 13: a policy's section 179 amount is for the class's challenger price; an asset of
+  // another first cost takes it in proportion (us_allowances.h rule 5), never above its basis.
+  own.depreciation = depreciation::section_179_of(model.policy->depreciation)
+                         ? model.depreciation->scaled(first_cost /
+                                                      model.policy->challenger_first_cost)
+                         : model.depreciation;
   if (model.cost_curve) {
     const Years remaining = std::max(1, model.policy->max_life_years - age);
     for (Years k = 1; k <= remaining; ++k) {

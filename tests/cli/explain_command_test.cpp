@@ -144,6 +144,9 @@ TEST_F(ExplainCommand, TextHasItsSectionsAndEndsWithTheCaution) {
   }
   EXPECT_NE(r.out.find("a regulator's retirement rule.\n"), std::string::npos);
   EXPECT_EQ(r.out.back(), '\n');
+  // SPEC 13 cautions: the tax rules of the class, and that they change by year and place.
+  EXPECT_NE(r.out.find("Tax rules used (class pump-fixture): "), std::string::npos);
+  EXPECT_NE(r.out.find("Note: tax rules change by year and jurisdiction"), std::string::npos);
 }
 
 TEST_F(ExplainCommand, UnknownAssetIsExitTwo) {

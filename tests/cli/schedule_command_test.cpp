@@ -57,7 +57,8 @@ TEST(ScheduleCommand, MacrsTakesAZeroSalvageAsSqlDoes) {
   const testing::Run some = run_tenure(
       {"schedule", "--method", "macrs", "--life", "5", "--salvage", "500", "--basis", "10000"});
   EXPECT_EQ(some.exit_code, 2);
-  EXPECT_EQ(some.err, "tenure schedule: --salvage: not used by method macrs (it takes --life)\n");
+  EXPECT_EQ(some.err, "tenure schedule: --salvage: not used by method macrs (it takes --life, "
+            "--convention, --quarter, --section-179, --bonus)\n");
 }
 
 // Bad arguments: exit 2, nothing on stdout, exactly `message` on stderr.
@@ -66,6 +67,58 @@ void expect_bad(std::initializer_list<std::string> args, const std::string& mess
   EXPECT_EQ(run.exit_code, 2) << message;
   EXPECT_EQ(run.out, "") << message;
   EXPECT_EQ(run.err, message + "\n");
+}
+
+// SPEC 13 options: IRS Publication 946 Table A-5 (quarter 4), 5-year column, on 4500 left after
+// a section 179 amount of 1000 and a 50% special allowance on 9000: year 1 is 5500 + 5% of 4500.
+TEST(ScheduleCommand, UsOptions) {
+  const testing::Run run = run_tenure({"schedule", "--method", "macrs", "--life", "5",
+                                       "--convention", "mid_quarter", "--quarter", "4",
+                                       "--section-179", "1000", "--bonus", "0.5", "--basis",
+                                       "10000", "--format", "json"});
+  ASSERT_EQ(run.exit_code, 0) << run.err;
+  const nlohmann::json out = nlohmann::json::parse(run.out);
+  const std::vector<double> percent = {5.00, 38.00, 22.80, 13.68, 10.94, 9.58};
+  ASSERT_EQ(out["rows"].size(), percent.size());
+  for (std::size_t k = 0; k < percent.size(); ++k) {
+    const double expensed = k == 0 ? 5500 : 0;
+    EXPECT_NEAR(out["rows"][k]["depreciation"].get<double>(), expensed + percent[k] * 45, 1e-9);
+  }
+  EXPECT_EQ(out["quarter"], 4);
+  EXPECT_EQ(out["bonus"], 0.5);
+}
+
+TEST(ScheduleCommand, UsOptionsAreCheckedByOption) {
+  expect_bad({"schedule", "--method", "macrs", "--life", "5", "--basis", "100", "--bonus", "1.2"},
+             "tenure schedule: --bonus: must be between 0 and 1");
+  expect_bad({"schedule", "--method", "macrs", "--life", "5", "--basis", "100", "--bonus", "-0.1"},
+             "tenure schedule: --bonus: must be between 0 and 1");
+  expect_bad(
+      {"schedule", "--method", "macrs", "--life", "5", "--basis", "100", "--section-179", "-5"},
+      "tenure schedule: --section-179: must be >= 0");
+  expect_bad(
+      {"schedule", "--method", "macrs", "--life", "5", "--basis", "100", "--section-179", "101"},
+      "tenure schedule: --section-179: must not exceed the basis");
+  expect_bad({"schedule", "--method", "macrs", "--life", "5", "--basis", "100", "--convention",
+              "mid_quarter", "--quarter", "5"},
+             "tenure schedule: --quarter: must be <= 4");
+  expect_bad({"schedule", "--method", "macrs", "--life", "5", "--basis", "100", "--convention",
+              "mid_quarter"},
+             "tenure schedule: --quarter: is required with the mid_quarter convention");
+  expect_bad({"schedule", "--method", "macrs", "--life", "5", "--basis", "100", "--quarter", "2"},
+             "tenure schedule: --quarter: applies only to the mid_quarter convention");
+  expect_bad({"schedule", "--method", "macrs", "--life", "5", "--basis", "100", "--convention",
+              "mid_month"},
+             "tenure schedule: --convention: unknown convention 'mid_month' (expected half_year "
+             "or mid_quarter)");
+  expect_bad({"schedule", "--method", "straight_line", "--life", "5", "--salvage", "0", "--basis",
+              "100", "--bonus", "0.5"},
+             "tenure schedule: --bonus: not used by method straight_line (it takes --life, "
+             "--salvage)");
+  expect_bad({"schedule", "--method", "macrs_ads", "--life", "5", "--basis", "100", "--quarter",
+              "1"},
+             "tenure schedule: --quarter: not used by method macrs_ads (it takes --life, "
+             "--section-179, --bonus)");
 }
 
 TEST(ScheduleCommand, ParametersAreRequiredAndCheckedByOption) {
@@ -102,7 +155,8 @@ TEST(ScheduleCommand, ParametersAreRequiredAndCheckedByOption) {
              "tenure schedule: --dispose-in-year: must be >= 1");
   expect_bad({"schedule", "--method", "double", "--basis", "100"},
              "tenure schedule: --method: unknown method 'double' (expected one of "
-             "straight_line, declining_balance, sum_of_years_digits, macrs, none, pool)");
+             "straight_line, declining_balance, sum_of_years_digits, macrs, macrs_ads, none, "
+             "pool)");
 }
 
 TEST(ScheduleCommand, UsageErrorsExitWithTwo) {

@@ -11,7 +11,11 @@ namespace {
 TEST(Scaled, DeductsFTimesAsMuchOnFTimesTheBasis) {
   const Spec specs[] = {StraightLineSpec{8, 2000}, DecliningBalanceSpec{6, 2.0, 1500, true},
                         DecliningBalanceSpec{6, 1.5, 3000, false}, SumOfYearsDigitsSpec{5, 1000},
-                        MacrsSpec{7}, NoDepreciationSpec{}};
+                        MacrsSpec{7}, NoDepreciationSpec{},
+                        MacrsSpec{5, MacrsConvention::mid_quarter, 3, {}}, MacrsAdsSpec{9},
+                        // The section 179 amount scales with the basis (us_allowances.h rule 5).
+                        MacrsSpec{7, MacrsConvention::half_year, std::nullopt, {5000.0, 0.6}},
+                        MacrsAdsSpec{5, {8000.0, std::nullopt}}};
   for (const Spec& spec : specs) {
     const auto method = make_method(spec);
     SCOPED_TRACE(std::string(method->name()));

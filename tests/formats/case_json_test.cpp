@@ -59,7 +59,7 @@ TEST(ReadCase, EveryBadInputNamesItsPathAndRule) {
        "market_values, depreciation)"},
       {"depreciation typo", [](json& c) { c["defender"]["depreciation"]["life_years"] = 3; },
        "$.defender.depreciation.life_years|unknown key (expected one of method, "
-       "recovery_years)"},
+       "recovery_years, convention, quarter, section_179, bonus)"},
       // Wrong types.
       {"marr as text", [](json& c) { c["marr"] = "0.1"; }, "$.marr|expected a number"},
       {"challenger as array", [](json& c) { c["challenger"] = json::array(); },
@@ -142,7 +142,7 @@ TEST(ReadCase, EveryBadInputNamesItsPathAndRule) {
        "$.study_period_years|must be >= 1"},
       {"unknown method", [](json& c) { c["challenger"]["depreciation"]["method"] = "double"; },
        "$.challenger.depreciation.method|unknown method 'double' (expected one of "
-       "straight_line, declining_balance, sum_of_years_digits, macrs, none, pool)"},
+       "straight_line, declining_balance, sum_of_years_digits, macrs, macrs_ads, none, pool)"},
       {"recovery period 4", [](json& c) { c["defender"]["depreciation"]["recovery_years"] = 4; },
        "$.defender.depreciation.recovery_years|must be one of 3, 5, 7, 10, 15, 20"},
       {"salvage above first cost",

@@ -63,13 +63,14 @@ TEST(DepreciationJson, EveryFieldIsRequired) {
 
 TEST(DepreciationJson, RejectsUnknownFieldsAndMethods) {
   EXPECT_EQ(read_error({{"method", "macrs"}, {"recovery_years", 5}, {"salvage", 0}}),
-            kPath + ".salvage|unknown key (expected one of method, recovery_years)");
+            kPath + ".salvage|unknown key (expected one of method, recovery_years, convention, "
+                    "quarter, section_179, bonus)");
   EXPECT_EQ(read_error({{"method", "none"}, {"life_years", 5}}),
             kPath + ".life_years|unknown key (expected one of method)");
   EXPECT_EQ(read_error({{"method", "foo"}}),
             kPath +
                 ".method|unknown method 'foo' (expected one of straight_line, "
-                "declining_balance, sum_of_years_digits, macrs, none, pool)");
+                "declining_balance, sum_of_years_digits, macrs, macrs_ads, none, pool)");
   EXPECT_EQ(read_error({{"method", 5}}), kPath + ".method|expected a string");
   EXPECT_EQ(read_error(json::array()), kPath + "|expected an object");
 }
@@ -129,16 +130,19 @@ TEST(DepreciationJson, WritesWhatItReads) {
 TEST(DepreciationJson, FormsListEveryMethodOnce) {
   std::vector<std::string_view> names;
   for (const DepreciationForm& form : depreciation_forms()) names.push_back(form.method);
-  EXPECT_EQ(names, (std::vector<std::string_view>{"straight_line", "declining_balance",
-                                                  "sum_of_years_digits", "macrs", "none", "pool"}));
+  EXPECT_EQ(names,
+            (std::vector<std::string_view>{"straight_line", "declining_balance",
+                                           "sum_of_years_digits", "macrs", "macrs_ads", "none",
+                                           "pool"}));
   EXPECT_EQ(find_depreciation_form("macrs")->fields,
-            std::vector<std::string_view>{"recovery_years"});
+            (std::vector<std::string_view>{"recovery_years", "convention", "quarter", "section_179",
+                                          "bonus"}));
   EXPECT_EQ(find_depreciation_form("nope"), nullptr);
 }
 
 TEST(DepreciationJson, MethodNamesFollowTheForms) {
   EXPECT_EQ(depreciation_method_names(),
-            "straight_line, declining_balance, sum_of_years_digits, macrs, none, pool");
+            "straight_line, declining_balance, sum_of_years_digits, macrs, macrs_ads, none, pool");
 }
 
 }  // namespace

@@ -69,7 +69,7 @@ TEST(FlatDepreciation, AZeroSalvageIsNotGivenToMethodsWithoutOne) {
   EXPECT_EQ(error_of({.method = "macrs", .basis = 10000, .salvage = 0, .life = 5}), "no error");
   EXPECT_EQ(error_of({.method = "none", .basis = 10000, .salvage = 0}), "no error");
   EXPECT_EQ(error_of({.method = "macrs", .basis = 10000, .salvage = 500, .life = 5}),
-            "salvage|unused by macrs (takes life)");
+            "salvage|unused by macrs (takes life convention quarter section_179 bonus)");
 }
 
 TEST(FlatDepreciation, EveryRuleNamesTheFlatParameter) {
@@ -77,7 +77,7 @@ TEST(FlatDepreciation, EveryRuleNamesTheFlatParameter) {
       // (1) the method.
       {{.method = "linear", .basis = 1},
        "method|unknown method 'linear' (expected one of straight_line, declining_balance, "
-       "sum_of_years_digits, macrs, none, pool)"},
+       "sum_of_years_digits, macrs, macrs_ads, none, pool)"},
       // (2) in the order of FlatDepreciation: basis, salvage, life, rate, switch.
       {{.method = "none"}, "basis|missing for none"},
       {{.method = "straight_line", .basis = 1000}, "salvage|missing for straight_line"},
@@ -135,7 +135,7 @@ TEST(FlatDepreciation, AnObjectsErrorsAreAtItsJsonPaths) {
        "$.life_years|unknown key (expected one of method)"},
       {{.method = "[1]", .basis = 1000},
        "method|unknown method '[1]' (expected one of straight_line, declining_balance, "
-       "sum_of_years_digits, macrs, none, pool)"},
+       "sum_of_years_digits, macrs, macrs_ads, none, pool)"},
       {{.method = "{", .basis = 1000},
        "$|invalid JSON at line 1, column 2: syntax error while parsing object key - unexpected "
        "end of input; expected string literal"},

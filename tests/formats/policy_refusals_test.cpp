@@ -80,7 +80,7 @@ TEST(PolicyRefusals, UnknownKeysAtEachLevel) {
       {"class", [](json& p) { van(p)["max_life"] = 15; }, "$.classes.van-delivery.max_life|" + kClassKeys},
       {"depreciation", [](json& p) { van(p)["depreciation"]["life_years"] = 5; },
        "$.classes.van-delivery.depreciation.life_years|unknown key (expected one of method, "
-       "recovery_years)"},
+       "recovery_years, convention, quarter, section_179, bonus)"},
       {"market value", [](json& p) { van(p)["market_value"]["decline"] = 0.1; },
        "$.classes.van-delivery.market_value.decline|unknown key (expected one of annual_decline)"},
   };

@@ -10,6 +10,7 @@
 
 #include "explain/explanation.h"
 #include "formats/caution.h"
+#include "formats/tax_rules_text.h"
 #include "formats/text_table.h"
 #include "report/html.h"
 #include "report/report_page.h"
@@ -87,6 +88,18 @@ TEST(ReportPage, IsSelfContainedAndEscapesDatabaseText) {
 TEST(ReportPage, CarriesTheCaution) {
   const std::string html = render_report(invented_run());
   EXPECT_NE(html.find(escape(formats::kCaution)), std::string::npos);
+}
+
+// SPEC 13 cautions: each class says which tax rules its after-tax figures used, with the caution
+// that tax rules change; the fixture's class is on straight line.
+TEST(ReportPage, SaysWhichTaxRulesEachClassUsed) {
+  const ReportData data = invented_run();
+  const std::string html = render_report(data);
+  const auto& spec = data.policy->classes.begin()->second.depreciation;
+  EXPECT_NE(html.find("Tax rules used: " + escape(formats::tax_rules_sentence(spec))),
+            std::string::npos);
+  EXPECT_NE(html.find("straight line over"), std::string::npos);
+  EXPECT_NE(html.find(escape(std::string(formats::kTaxRulesCaution))), std::string::npos);
 }
 
 TEST(ReportPage, DrawsTheClassChartsAndOneChartPerDueAsset) {

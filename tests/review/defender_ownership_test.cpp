@@ -101,6 +101,23 @@ TEST(DefenderOwnership, CostsBelowZeroAreReadAsZero) {
   }
 }
 
+// SPEC 13: a policy's section 179 amount (here 9,250, half the challenger's 18,500) is taken in
+// proportion by an asset of another first cost: 5,000 on 10,000, then MACRS 7-year (Pub 946
+// Table A-1, 14.29% in year 1) on the other 5,000. Without it, 9,250 would stand on 10,000.
+TEST(DefenderOwnership, Section179IsInProportionToTheAssetsFirstCost) {
+  const ClassPolicy policy{18500, 10,
+                           depreciation::MacrsSpec{7, depreciation::MacrsConvention::half_year,
+                                                   std::nullopt, {9250.0, std::nullopt}},
+                           0.2, fleet::CostModelChoice::linear};
+  const ClassModel model = make_class_model("pump-duty", policy, 0, std::nullopt,
+                                            fleet::policy_value_curve(0.2), kRates, 0.02);
+  const replacement::Ownership own = defender_ownership(model, 10000, 0, 10000, 1.0);
+  EXPECT_NEAR(own.depreciation->deductions(10000).front(), 5000 + 0.1429 * 5000, 1e-9);
+  // An asset cheaper than the 179 amount is not refused: 2,000 expenses 1,000.
+  const replacement::Ownership cheap = defender_ownership(model, 2000, 0, 2000, 1.0);
+  EXPECT_NEAR(cheap.depreciation->deductions(2000).front(), 1000 + 0.1429 * 1000, 1e-9);
+}
+
 TEST(DefenderOwnership, WithoutACostCurveTheSeriesAreEmpty) {
   const ClassModel model = make_class_model("pump-duty", kPolicy, 0, std::nullopt,
                                             fleet::policy_value_curve(0.2), kRates, 0.02);

@@ -86,7 +86,7 @@ SELECT * FROM tenure_depreciation('straight_line', 10000, 0, 0); -- error: tenur
 SELECT * FROM tenure_depreciation('straight_line', 10000, 0, 5.5); -- error: tenure_depreciation: 4th argument (life) must be a whole number, not 5.5
 SELECT * FROM tenure_depreciation('straight_line', 10000, 0, 5, NULL, NULL, 0); -- error: tenure_depreciation: 7th argument (dispose_in_year) must be >= 1
 SELECT * FROM tenure_depreciation('none', 10000, 0, 5); -- error: tenure_depreciation: 4th argument (life) is not used by method none
-SELECT * FROM tenure_depreciation('linear', 10000, 0, 5); -- error: tenure_depreciation: unknown method 'linear' (expected one of straight_line, declining_balance, sum_of_years_digits, macrs, none, pool)
+SELECT * FROM tenure_depreciation('linear', 10000, 0, 5); -- error: tenure_depreciation: unknown method 'linear' (expected one of straight_line, declining_balance, sum_of_years_digits, macrs, macrs_ads, none, pool)
 SELECT * FROM tenure_depreciation(NULL, 10000, 0, 5); -- error: tenure_depreciation: 1st argument (method) must be text
 SELECT * FROM tenure_depreciation('{"method": "macrs", "recovery_years": 4}', 10000); -- error: tenure_depreciation: $.recovery_years: must be one of 3, 5, 7, 10, 15, 20
 SELECT * FROM tenure_depreciation('{"method": "macrs"}', 10000); -- error: tenure_depreciation: $.recovery_years: required whole number is missing
@@ -104,3 +104,22 @@ SELECT tenure_macrs_rate(NULL, 1); -- error: tenure_macrs_rate: 1st argument (re
 SELECT * FROM tenure_depreciation('macrs', 1e307, 0, 5); -- error: tenure_depreciation: 2nd argument (basis) must be at most 1e15 in magnitude (no equipment costs more)
 SELECT tenure_book_value('straight_line', 1e308, 0, 5, 1); -- error: tenure_book_value: 2nd argument (basis) must be at most 1e15 in magnitude (no equipment costs more)
 SELECT tenure_book_value('straight_line', 1e15, 0, 5, 5) = 0;
+-- US fields (SPEC 13) as the hidden arguments section_179, bonus, convention, quarter.
+-- IRS Publication 946 Table A-5 (quarter 4), 5-year column: 5.00 38.00 22.80 13.68 10.94 9.58.
+SELECT (SELECT group_concat(depreciation, ',') FROM tenure_depreciation('macrs', 10000, 0, 5, NULL, NULL, NULL, NULL, NULL, 'mid_quarter', 4)) = '500.0,3800.0,2280.0,1368.0,1094.0,958.0';
+-- Section 179 of 1000, then 50% of 9000, then Table A-1 on 4500: 1000 + 4500 + 900 in year 1.
+SELECT (SELECT group_concat(depreciation, ',') FROM tenure_depreciation('macrs', 10000, 0, 5, NULL, NULL, NULL, 1000, 0.5)) = '6400.0,1440.0,864.0,518.4,518.4,259.2';
+-- ADS, 5 years, half-year convention (Pub 946 Table A-8 shape): 10, 20, 20, 20, 20, 10 percent.
+SELECT (SELECT group_concat(depreciation, ',') FROM tenure_depreciation('macrs_ads', 10000, 0, 5)) = '1000.0,2000.0,2000.0,2000.0,2000.0,1000.0';
+-- Sold in year 3 after a quarter-4 placing: (4 - 0.5) / 4 of 2280.
+SELECT (SELECT depreciation FROM tenure_depreciation('macrs', 10000, 0, 5, NULL, NULL, 3, NULL, NULL, 'mid_quarter', 4) WHERE year = 3) = 1995;
+SELECT * FROM tenure_depreciation('macrs', 10000, 0, 5, NULL, NULL, NULL, NULL, 1.5); -- error: tenure_depreciation: 9th argument (bonus) must be between 0 and 1
+SELECT * FROM tenure_depreciation('macrs', 10000, 0, 5, NULL, NULL, NULL, 20000); -- error: tenure_depreciation: 8th argument (section_179) must not exceed the basis
+SELECT * FROM tenure_depreciation('macrs', 10000, 0, 5, NULL, NULL, NULL, -1); -- error: tenure_depreciation: 8th argument (section_179) must be >= 0
+SELECT * FROM tenure_depreciation('straight_line', 10000, 0, 5, NULL, NULL, NULL, 5); -- error: tenure_depreciation: 8th argument (section_179) is not used by method straight_line
+SELECT * FROM tenure_depreciation('macrs', 10000, 0, 5, NULL, NULL, NULL, NULL, NULL, 'mid_quarter', 5); -- error: tenure_depreciation: 11th argument (quarter) must be <= 4
+SELECT * FROM tenure_depreciation('macrs', 10000, 0, 5, NULL, NULL, NULL, NULL, NULL, 'mid_quarter'); -- error: tenure_depreciation: 11th argument (quarter) is required with the mid_quarter convention
+SELECT * FROM tenure_depreciation('macrs', 10000, 0, 5, NULL, NULL, NULL, NULL, NULL, NULL, 2); -- error: tenure_depreciation: 11th argument (quarter) applies only to the mid_quarter convention
+SELECT * FROM tenure_depreciation('macrs', 10000, 0, 5, NULL, NULL, NULL, NULL, NULL, 'mid_month'); -- error: tenure_depreciation: 10th argument (convention) unknown convention 'mid_month' (expected half_year or mid_quarter)
+SELECT * FROM tenure_depreciation('macrs_ads', 10000, 0, 5, NULL, NULL, NULL, NULL, NULL, 'mid_quarter', 1); -- error: tenure_depreciation: 10th argument (convention) is not used by method macrs_ads
+SELECT * FROM tenure_depreciation('{"method": "straight_line", "life_years": 5, "salvage": 0, "bonus": 0.5}', 10000); -- error: tenure_depreciation: 9th argument (bonus) applies only to the US methods macrs and macrs_ads, not straight_line
