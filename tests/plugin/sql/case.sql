@@ -24,5 +24,5 @@ SELECT tenure_case(NULL); -- error: tenure_case: 1st argument (case_json) must b
 SELECT tenure_case(42); -- error: tenure_case: 1st argument (case_json) must be text
 SELECT tenure_case('{"marr": 0.10}'); -- error: tenure_case: $.income_tax_rate: required number is missing
 SELECT tenure_case('{"marr": 0.10, "income_tax_rate": 0, "challenger": {"first_cost": -5, "operating_costs": [1], "market_values": [0], "depreciation": {"method": "none"}}}'); -- error: tenure_case: $.challenger.first_cost: must be > 0
-SELECT tenure_case('{"marr": 0.10, "income_tax_rate": 0, "colour": "red"}'); -- error: tenure_case: $.colour: unknown key (expected one of marr, income_tax_rate, after_tax_marr, capital_gains_tax_rate, lead_time_years, review_margin, challenger, defender, study_period_years)
+SELECT tenure_case('{"marr": 0.10, "income_tax_rate": 0, "colour": "red"}'); -- error: tenure_case: $.colour: unknown key (expected one of marr, income_tax_rate, after_tax_marr, capital_gains_tax_rate, lead_time_years, review_margin, challenger, challengers, improvement, defender, study_period_years)
 SELECT tenure_case('{'); -- error: tenure_case: $: invalid JSON at line 1, column 2: syntax error while parsing object key - unexpected end of input; expected string literal
