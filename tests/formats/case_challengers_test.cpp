@@ -140,6 +140,20 @@ TEST(CaseChallengers, ImprovementListsTheLeastEuacByYear) {
   // Every amount 5% less a year, so C*_k = 0.95^k C*_0 (replacement/challengers.h rule (2)).
   EXPECT_NEAR(by_year[2]["least_euac"].get<double>(), 0.95 * 0.95 * today, 1e-9 * today);
   EXPECT_EQ(by_year[2]["years_from_now"], 2);
+  // review/at_stake.h rule (2): no break-evens under improvement; the timing's stakes stand.
+  const replacement::CaseResult result = replacement::analyse(input);
+  const review::CaseVerdict verdict = review::case_verdict(input, result);
+  EXPECT_FALSE(verdict.at_stake.break_even_price.has_value());
+  EXPECT_FALSE(verdict.at_stake.break_even_cost_factor.has_value());
+  EXPECT_FALSE(verdict.at_stake.close_call);
+  const auto& pw = result.decision->timing.present_worth;
+  EXPECT_EQ(verdict.at_stake.early_cost, pw[0] - pw[static_cast<std::size_t>(result.decision->timing.keep_years)]);
+  // Without improvement the same case has both break-evens.
+  document.erase("improvement");
+  const replacement::Case plain = read_case(document.dump());
+  const review::CaseVerdict plain_verdict = review::case_verdict(plain, replacement::analyse(plain));
+  EXPECT_TRUE(plain_verdict.at_stake.break_even_price.has_value());
+  EXPECT_TRUE(plain_verdict.at_stake.break_even_cost_factor.has_value());
 }
 
 }  // namespace

@@ -5,6 +5,10 @@
 SELECT json_valid(tenure_case(readfile('fixtures/cases/delivery_van.json')));
 SELECT json_extract(tenure_case(readfile('fixtures/cases/delivery_van.json')), '$.decision.verdict') IN ('keep', 'review', 'replace');
 SELECT json_extract(tenure_case(readfile('fixtures/cases/delivery_van.json')), '$.challenger.after_tax.esl_years') BETWEEN 1 AND 6;
+-- Several challengers (SPEC 14): the chosen one is named, and it has the least after-tax EUAC.
+SELECT json_extract(tenure_case(readfile('fixtures/cases/delivery_van_choices.json')), '$.chosen_challenger') = 'electric';
+SELECT (SELECT min(json_extract(value, '$.after_tax.euac')) FROM json_each(json_extract(tenure_case(readfile('fixtures/cases/delivery_van_choices.json')), '$.challengers'))) = json_extract(tenure_case(readfile('fixtures/cases/delivery_van_choices.json')), '$.decision.challenger_euac');
+SELECT tenure_case('{"marr": 0.10, "income_tax_rate": 0, "challengers": []}'); -- error: tenure_case: $.challengers: must list at least one challenger
 -- Closed form: no tax, no depreciation, costs 1000 a year, worthless when sold: EUAC(n) =
 -- 10000 (A/P, 10%, n) + 1000 falls with n, so the economic service life is the longest, 3.
 CREATE TABLE cases(name TEXT, body TEXT);
