@@ -9,10 +9,9 @@
 //   // [{"years_from_now": 0, "least_euac": 14210.5, "esl_years": 6}, ...]
 #pragma once
 
+#include <nlohmann/json.hpp>
 #include <span>
 #include <string>
-
-#include <nlohmann/json.hpp>
 
 #include "replacement/case_analysis.h"
 

@@ -1,10 +1,10 @@
 // Several challengers, the best one and its improved successors (see challengers.h).
 #include "replacement/challengers.h"
 
+#include <fmt/format.h>
+
 #include <cmath>
 #include <set>
-
-#include <fmt/format.h>
 
 #include "core/errors.h"
 #include "replacement/life_curve.h"

@@ -127,6 +127,15 @@ TEST(CaseChallengers, OneChallengerInEitherFormGivesTheSameDocument) {
   EXPECT_EQ(out_a, out_b);
 }
 
+TEST(CaseChallengers, ImprovementZeroGivesTodaysDocument) {
+  json with_zero = several_case();
+  with_zero["improvement"] = 0;
+  const replacement::Case a = read_case(with_zero.dump());
+  const replacement::Case b = read_case(several_case().dump());
+  EXPECT_EQ(case_result_to_json(a, replacement::analyse(a)),
+            case_result_to_json(b, replacement::analyse(b)));
+}
+
 TEST(CaseChallengers, ImprovementListsTheLeastEuacByYear) {
   json document = several_case();
   document["improvement"] = 0.05;
@@ -147,11 +156,13 @@ TEST(CaseChallengers, ImprovementListsTheLeastEuacByYear) {
   EXPECT_FALSE(verdict.at_stake.break_even_cost_factor.has_value());
   EXPECT_FALSE(verdict.at_stake.close_call);
   const auto& pw = result.decision->timing.present_worth;
-  EXPECT_EQ(verdict.at_stake.early_cost, pw[0] - pw[static_cast<std::size_t>(result.decision->timing.keep_years)]);
+  EXPECT_EQ(verdict.at_stake.early_cost,
+            pw[0] - pw[static_cast<std::size_t>(result.decision->timing.keep_years)]);
   // Without improvement the same case has both break-evens.
   document.erase("improvement");
   const replacement::Case plain = read_case(document.dump());
-  const review::CaseVerdict plain_verdict = review::case_verdict(plain, replacement::analyse(plain));
+  const review::CaseVerdict plain_verdict =
+      review::case_verdict(plain, replacement::analyse(plain));
   EXPECT_TRUE(plain_verdict.at_stake.break_even_price.has_value());
   EXPECT_TRUE(plain_verdict.at_stake.break_even_cost_factor.has_value());
 }

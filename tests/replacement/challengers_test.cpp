@@ -2,13 +2,14 @@
 // one-challenger form and a one-element list agree field by field, a dominated challenger is
 // never chosen, ties go to the first listed, and the timing with improvement g is checked
 // against its closed form. The series are invented.
+#include "replacement/challengers.h"
+
 #include <gtest/gtest.h>
 
 #include <cmath>
 
 #include "core/errors.h"
 #include "replacement/case_analysis.h"
-#include "replacement/challengers.h"
 
 namespace tenure::replacement {
 namespace {
@@ -18,13 +19,20 @@ Ownership van(Money price = 60000, double cost_factor = 1,
   const double s = price / 60000;
   std::vector<Money> costs = {4000, 5500, 7000, 8500, 10000, 12500};
   for (Money& c : costs) c *= cost_factor;
-  return {price, 0, price, costs,
+  return {price,
+          0,
+          price,
+          costs,
           {45000 * s, 36000 * s, 29000 * s, 23000 * s, 18000 * s, 14000 * s},
           depreciation::make_method(spec)};
 }
 
 Ownership old_van() {
-  return {38000, 4, 14000, {9000, 10500, 12000, 14500}, {11000, 8500, 6500, 5000},
+  return {38000,
+          4,
+          14000,
+          {9000, 10500, 12000, 14500},
+          {11000, 8500, 6500, 5000},
           depreciation::make_method(depreciation::MacrsSpec{5})};
 }
 
@@ -54,7 +62,8 @@ void expect_same_sale(const tax::SaleFlow& a, const tax::SaleFlow& b) {
 void expect_same_basis(const BasisAnalysis& a, const BasisAnalysis& b) {
   ASSERT_EQ(a.costs.max_years(), b.costs.max_years());
   EXPECT_EQ(a.costs.rate(), b.costs.rate());
-  for (Years n = 0; n <= a.costs.max_years(); ++n) EXPECT_EQ(a.costs.pw_cost(n), b.costs.pw_cost(n));
+  for (Years n = 0; n <= a.costs.max_years(); ++n)
+    EXPECT_EQ(a.costs.pw_cost(n), b.costs.pw_cost(n));
   EXPECT_EQ(a.curve.euac, b.curve.euac);
   EXPECT_EQ(a.curve.marginal_costs, b.curve.marginal_costs);
   EXPECT_EQ(a.curve.best_years, b.curve.best_years);
@@ -140,7 +149,8 @@ TEST(Challengers, BestOnTheBasisIsWeighedAndTiesGoToTheFirstListed) {
   c.challengers = {{"a", van()}, {"b", van()}, {"cheap-to-run", van(60000, 0.6)}};
   CaseResult r = analyse(c);
   EXPECT_EQ(r.chosen, 2u);
-  EXPECT_LT(r.challengers[2].on(r.basis).curve.best_euac, r.challengers[0].on(r.basis).curve.best_euac);
+  EXPECT_LT(r.challengers[2].on(r.basis).curve.best_euac,
+            r.challengers[0].on(r.basis).curve.best_euac);
   c.challengers.pop_back();
   r = analyse(c);
   EXPECT_EQ(r.chosen, 0u);  // "a" and "b" are equal: the first listed
@@ -205,9 +215,17 @@ TEST(Improvement, TimingMatchesItsClosedFormForAConstantCostChallenger) {
   //   T(0) = C*_0 / i,   T(k) = V + d (1 - (1+i)^-k) / i + ((1-g)/(1+i))^k C*_0 / i.
   const double i = 0.10, g = 0.03, P = 50000, c = 3000, V = 5000, d = 9000;
   const int N = 5;
-  const Ownership challenger{P, 0, P, std::vector<Money>(N, c), std::vector<Money>(N, 0.0),
+  const Ownership challenger{P,
+                             0,
+                             P,
+                             std::vector<Money>(N, c),
+                             std::vector<Money>(N, 0.0),
                              depreciation::make_method(depreciation::NoDepreciationSpec{})};
-  const Ownership defender{30000, 6, V, std::vector<Money>(4, d), std::vector<Money>(4, 0.0),
+  const Ownership defender{30000,
+                           6,
+                           V,
+                           std::vector<Money>(4, d),
+                           std::vector<Money>(4, 0.0),
                            depreciation::make_method(depreciation::NoDepreciationSpec{})};
   Case input{tax::Rates::make(i, 0), challenger, defender, std::nullopt};
   input.improvement = g;
@@ -216,8 +234,8 @@ TEST(Improvement, TimingMatchesItsClosedFormForAConstantCostChallenger) {
   ASSERT_EQ(decision.timing.present_worth.size(), 5u);
   EXPECT_NEAR(decision.timing.present_worth[0], c_star / i, 1e-9 * c_star / i);
   for (int k = 1; k <= 4; ++k) {
-    const double t = V + d * (1 - std::pow(1 + i, -k)) / i +
-                     std::pow((1 - g) / (1 + i), k) * c_star / i;
+    const double t =
+        V + d * (1 - std::pow(1 + i, -k)) / i + std::pow((1 - g) / (1 + i), k) * c_star / i;
     EXPECT_NEAR(decision.timing.present_worth[static_cast<std::size_t>(k)], t, 1e-9 * t) << k;
     EXPECT_NEAR(decision.challenger_euac_by_year[static_cast<std::size_t>(k)],
                 std::pow(1 - g, k) * c_star, 1e-9 * c_star);
