@@ -27,8 +27,7 @@ AssetAnalysis analyse_asset(const Ownership& asset, const tax::Rates& rates) {
 }
 
 Decision decide(const AssetAnalysis& defender, const AssetAnalysis& challenger,
-                const tax::Rates& rates, const Ownership* challenger_input,
-                double improvement) {
+                const tax::Rates& rates, const ImprovedChallengers* later) {
   Decision d{};
   d.basis = rates.after_tax() ? Basis::after_tax : Basis::before_tax;
   const BasisAnalysis& def = defender.on(d.basis);
@@ -37,12 +36,14 @@ Decision decide(const AssetAnalysis& defender, const AssetAnalysis& challenger,
   d.challenger_esl = ch.curve.best_years;
   d.defender_euac = def.curve.best_euac;
   d.defender_best_years = def.curve.best_years;
-  if (improvement > 0 && challenger_input) {
-    ImprovedChallengers later = improved_least_euacs(*challenger_input, rates, d.basis,
-                                                     improvement, def.costs.max_years());
-    d.timing = optimal_replacement(def.costs, later.least_euac);
-    d.challenger_euac_by_year = std::move(later.least_euac);
-    d.challenger_esl_by_year = std::move(later.esl_years);
+  if (later) {
+    const auto years = static_cast<std::size_t>(def.costs.max_years()) + 1;
+    if (later->least_euac.size() < years) {
+      throw RuntimeFailure("the improved challengers do not cover the defender's years");
+    }
+    d.challenger_euac_by_year.assign(later->least_euac.begin(), later->least_euac.begin() + years);
+    d.challenger_esl_by_year.assign(later->esl_years.begin(), later->esl_years.begin() + years);
+    d.timing = optimal_replacement(def.costs, d.challenger_euac_by_year);
   } else {
     d.timing = optimal_replacement(def.costs, d.challenger_euac);
   }
@@ -98,8 +99,12 @@ CaseResult analyse(const Case& input) {
                     std::nullopt, std::move(several),    chosen};
   if (input.defender) {
     result.defender = analyse_asset(*input.defender, rates);
-    result.decision = decide(*result.defender, result.challenger, rates,
-                             &chosen_challenger(input, result), input.improvement);
+    std::optional<ImprovedChallengers> later;
+    if (input.improvement > 0) {
+      later = improved_least_euacs(chosen_challenger(input, result), rates, basis,
+                                   input.improvement, result.defender->before_tax.costs.max_years());
+    }
+    result.decision = decide(*result.defender, result.challenger, rates, later ? &*later : nullptr);
   }
   if (input.study_period_years) {
     const KeepingCosts* defender =

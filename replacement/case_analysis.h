@@ -89,12 +89,13 @@ CaseResult analyse(const Case& input);
 // One asset on both bases (used by analyse and by the nightly review).
 AssetAnalysis analyse_asset(const Ownership& asset, const tax::Rates& rates);
 
-// The decision between a defender and a challenger already analysed. With `improvement` g > 0,
-// `challenger_input` (what `challenger` analysed) is bought later at lower amounts and the timing
-// weighs C*_k (SPEC 14); with g = 0 it is not read.
+struct ImprovedChallengers;  // replacement/challengers.h
+
+// The decision between a defender and a challenger already analysed. With improving technology
+// (SPEC 14), `later` holds C*_k of `challenger` bought k = 0.. years from now (at least the
+// defender's years + 1; a class computes it once for all its assets) and the timing weighs it.
 Decision decide(const AssetAnalysis& defender, const AssetAnalysis& challenger,
-                const tax::Rates& rates, const Ownership* challenger_input = nullptr,
-                double improvement = 0);
+                const tax::Rates& rates, const ImprovedChallengers* later = nullptr);
 
 // The challenger the case's decision weighs: `challenger`, or the chosen one of `challengers`.
 const Ownership& chosen_challenger(const Case& input, const CaseResult& result);

@@ -243,6 +243,22 @@ TEST(Improvement, TimingMatchesItsClosedFormForAConstantCostChallenger) {
   }
 }
 
+TEST(Improvement, DecideReadsTheYearsItNeedsFromALongerList) {
+  // A class computes C*_k once over its longest life; each defender reads its own years.
+  Case c = one_van_case(0.25);
+  c.improvement = 0.03;
+  const CaseResult r = analyse(c);
+  const ImprovedChallengers later =
+      improved_least_euacs(c.challenger, c.rates, Basis::after_tax, 0.03, 12);
+  const Decision d = decide(*r.defender, r.challenger, c.rates, &later);
+  EXPECT_EQ(d.timing.present_worth, r.decision->timing.present_worth);
+  EXPECT_EQ(d.challenger_euac_by_year, r.decision->challenger_euac_by_year);
+  ASSERT_EQ(d.challenger_euac_by_year.size(), 5u);  // k = 0..4, the defender's four years
+  const ImprovedChallengers too_few =
+      improved_least_euacs(c.challenger, c.rates, Basis::after_tax, 0.03, 3);
+  EXPECT_THROW(decide(*r.defender, r.challenger, c.rates, &too_few), RuntimeFailure);
+}
+
 TEST(Improvement, NeverBringsTheReplacementEarlier) {
   // T_g(k) - T_0(k) = (P/F,i,k) ((1-g)^k - 1) C*_0 / i falls with k, so adding it cannot move
   // the least T(k) to an earlier k: k*(g) >= k*(0). (A challenger that gets cheaper is worth
