@@ -5,6 +5,7 @@
 #include "app/case_run.h"
 #include "cli/commands.h"
 #include "cli/input_file.h"
+#include "formats/json_text.h"
 
 namespace tenure::cli {
 namespace {
@@ -19,7 +20,7 @@ void run_case(const CaseOptions& options, const Console& console) {
   if (options.format == "text") {
     console.out << app::case_result_tables(text);
   } else {
-    console.out << app::case_result_json(text).dump(2) << '\n';
+    console.out << formats::json_output(app::case_result_json(text)) << '\n';
   }
 }
 

@@ -12,6 +12,7 @@
 #include "app/due_list.h"
 #include "cli/commands.h"
 #include "formats/due_list_output.h"
+#include "formats/json_text.h"
 
 namespace tenure::cli {
 namespace {
@@ -31,10 +32,7 @@ void run_due(const DueOptions& o, const Console& console) {
   if (o.format == "csv") {
     console.out << formats::due_list_csv(list);
   } else if (o.format == "json") {
-    // Text that is not UTF-8 (an asset id, say) is written with U+FFFD rather than refused.
-    console.out << formats::due_list_json(list).dump(2, ' ', false,
-                                                     nlohmann::json::error_handler_t::replace)
-                << '\n';
+    console.out << formats::json_output(formats::due_list_json(list)) << '\n';
   } else {
     console.out << formats::due_list_table(list);
   }

@@ -13,6 +13,7 @@
 #include "core/errors.h"
 #include "explain/explain_json.h"
 #include "explain/explain_text.h"
+#include "formats/json_text.h"
 
 namespace tenure::cli {
 namespace {
@@ -28,7 +29,8 @@ void run_explain(const ExplainOptions& o, const Console& console) {
   db::Connection db = db::Connection::open_existing(o.db, "--db");
   const explain::Explanation e = app::explain_stored_asset(db, o.asset, o.run);
   if (o.format == "json") {
-    console.out << explain::explanation_to_json(e).dump(2) << '\n';
+    console.out << formats::json_output(explain::explanation_to_json(e), 2, {"equivalent_case"})
+                << '\n';
   } else {
     console.out << explain::explanation_to_text(e);
   }

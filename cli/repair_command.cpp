@@ -9,6 +9,7 @@
 
 #include "app/repair_check.h"
 #include "cli/commands.h"
+#include "formats/json_text.h"
 #include "formats/repair_output.h"
 
 namespace tenure::cli {
@@ -27,7 +28,7 @@ void run_repair(const RepairOptions& o, const Console& console) {
   db::Connection db = db::Connection::open_existing(o.db, "--db");
   const app::RepairCheck check = app::check_repair(db, o.asset, o.estimate, o.run);
   if (o.format == "json") {
-    console.out << formats::repair_check_to_json(check).dump(2) << '\n';
+    console.out << formats::json_output(formats::repair_check_to_json(check)) << '\n';
   } else {
     console.out << formats::repair_check_text(check);
   }

@@ -25,6 +25,7 @@
 #include "core/errors.h"
 #include "app/review_run.h"
 #include "formats/caution.h"
+#include "formats/json_text.h"
 #include "formats/text_table.h"
 
 namespace tenure::cli {
@@ -151,7 +152,7 @@ void run(const ReviewCommandOptions& o, const Console& console) {
       : ::isatty(STDOUT_FILENO) ? "text"
                                 : "line";
   if (format == "json") {
-    console.out << summary_json(summary).dump(2) << '\n';
+    console.out << formats::json_output(summary_json(summary)) << '\n';
     return;
   }
   if (format == "line") {

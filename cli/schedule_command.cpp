@@ -13,6 +13,7 @@
 #include "core/errors.h"
 #include "formats/depreciation_json.h"
 #include "formats/flat_depreciation.h"
+#include "formats/json_text.h"
 #include "formats/schedule_json.h"
 
 namespace tenure::cli {
@@ -89,7 +90,8 @@ void run_schedule(const ScheduleOptions& options, const Console& console) {
   try {
     const formats::FlatSchedule s = formats::flat_schedule(flat_parameters(options), kRefusals);
     if (options.format == "json") {
-      console.out << formats::schedule_to_json(s.spec, s.schedule, s.disposal_year).dump(2) << '\n';
+      console.out << formats::json_output(
+          formats::schedule_to_json(s.spec, s.schedule, s.disposal_year)) << '\n';
     } else {
       console.out << formats::schedule_to_table(s.spec, s.schedule, s.disposal_year);
     }

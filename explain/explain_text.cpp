@@ -62,7 +62,7 @@ std::string band_words(const Explanation& e) {
   const review::EslBand& band = *e.model.band;
   std::string out = fmt::format(
       "{}: the lives whose {} EUAC is within esl_band {} of the least; recomputed here from the "
-      "challenger's EUAC curve (section 8b)",
+      "challenger's EUAC curve (section 10)",
       life_span_words(band.low, band.high), basis_words(e.review.basis),
       percent(e.policy->esl_band));
   if (!c.esl_band_low || !c.esl_band_high) return out + "; not stored by this run";
@@ -90,6 +90,7 @@ std::string inputs(const Explanation& e) {
   const review::ClassPolicy& p = class_policy(e);
   const std::string assets = e.policy->sources.assets;
   TextTable t({"input", "value", "where it comes from"}, 3);
+  t.wrap_last_column(formats::kLineWidth);
   t.add_row({"asset", a.asset_id, "relation '" + assets + "'"});
   t.add_row({"class", a.asset_class, "relation '" + assets + "'; its policy below"});
   if (e.input) {
@@ -115,6 +116,7 @@ std::string inputs(const Explanation& e) {
 std::string rates_and_money(const Explanation& e) {
   const review::Policy& p = *e.policy;
   TextTable t({"rate or rule", "value", "meaning"}, 3);
+  t.wrap_last_column(formats::kLineWidth);
   t.add_row({"MARR before tax", percent(p.rates.marr), "per year"});
   t.add_row({"income tax rate", percent(p.rates.income_tax_rate),
              "effective combined rate; 0 means before-tax only"});
@@ -143,6 +145,7 @@ std::string class_curves(const Explanation& e) {
   const results::ClassRow& c = e.stored_class;
   const review::ClassPolicy& p = class_policy(e);
   TextTable t({"curve", "value"}, 2);
+  t.wrap_last_column(formats::kLineWidth);
   if (const auto& curve = e.model.cost_curve) {
     if (curve->model == fleet::CostModel::linear) {
       t.add_row({"cost curve", fmt::format("linear: cost of age-year k = a + g (k - 1), a = {}, "
@@ -185,7 +188,8 @@ std::string class_curves(const Explanation& e) {
   std::string body = t.render();
   if (const std::string firmness = esl_sentence(c, e.review.basis, e.policy->esl_band);
       !firmness.empty()) {
-    body += "  in short (as stored): " + firmness + "\n";
+    body += formats::wrap_words("in short (as stored): " + firmness, formats::kLineWidth, "  ",
+                                "    ");
   }
   return section(fmt::format("3. Class curves: {} ({} assets)", c.asset_class, c.assets), body);
 }
@@ -223,19 +227,22 @@ std::string own_costs(const Explanation& e) {
              predicted > 0 ? ratio(observed / predicted) : "-"});
   const fleet::Credibility& cr = own.credibility;
   std::string body = t.render();
-  body += fmt::format(
-      "  events: {} counted, {} in the current age-year or after the as-of date (not complete), "
-      "{} not usable\n",
-      own.events_counted, own.events_not_complete, own.events_not_usable);
+  const auto line = [](const std::string& words) {
+    return formats::wrap_words(words, formats::kLineWidth, "  ", "    ");
+  };
+  body += line(fmt::format(
+      "events: {} counted, {} in the current age-year or after the as-of date (not complete), "
+      "{} not usable",
+      own.events_counted, own.events_not_complete, own.events_not_usable));
   if (cr.measured) {
-    body += fmt::format(
-        "  credibility: m = {} complete years, r = observed / curve = {}, z = m / (m + 3) = {}, "
-        "factor = 1 + z (r - 1) = {}\n",
-        cr.years, ratio(cr.ratio), ratio(cr.weight), ratio(cr.factor));
+    body += line(fmt::format(
+        "credibility: m = {} complete years, r = observed / curve = {}, z = m / (m + 3) = {}, "
+        "factor = 1 + z (r - 1) = {}",
+        cr.years, ratio(cr.ratio), ratio(cr.weight), ratio(cr.factor)));
   } else {
-    body += fmt::format("  credibility: not measured (m = {}, or the curve predicts no cost): "
-                        "factor = 1, the class curve as is\n",
-                        cr.years);
+    body += line(fmt::format("credibility: not measured (m = {}, or the curve predicts no cost): "
+                             "factor = 1, the class curve as is",
+                             cr.years));
   }
   const bool agrees = cr.years == a.cost_years && close(cr.ratio, a.cost_ratio) &&
                       close(cr.factor, a.credibility_factor);
@@ -262,8 +269,9 @@ std::string verdict_rule(const Explanation& e) {
                holds(f.within_lead_time)});
     body += t.render();
   }
-  body += fmt::format("  verdict: {}\n  {}\n", review::to_string(f.verdict), f.reason);
-  return section("11. Verdict", body);
+  body += fmt::format("  verdict: {}\n", review::to_string(f.verdict)) +
+          formats::wrap_words(f.reason, formats::kLineWidth, "  ", "  ");
+  return section("14. Verdict", body);
 }
 
 }  // namespace text
@@ -274,12 +282,13 @@ std::string headline(const Explanation& e) {
   const review::AssetReview& r = e.review;
   const std::string verdict = review::verdict_headline(r.finding);
   std::string out = fmt::format(
-      "tenure explain: asset {} (class {}), {} as of {}\n\nVerdict: {}, {} basis\n  {}\n",
+      "tenure explain: asset {} (class {}), {} as of {}\n\nVerdict: {}, {} basis\n",
       e.stored.asset_id, e.stored.asset_class, run_name(e.run), e.run.as_of, verdict,
-      text::basis_words(r.basis), r.finding.reason);
+      text::basis_words(r.basis));
+  out += formats::wrap_words(r.finding.reason, formats::kLineWidth, "  ", "  ");
   if (e.reproduced()) {
     out += "Check: the stored figures (EUACs, next year's marginal cost, k*, verdict, reason) are "
-           "reproduced exactly\nby recomputing from the stored inputs.\n";
+           "reproduced\nexactly by recomputing from the stored inputs.\n";
   } else {
     out += "CHECK FAILED: stored figures differ from the recomputation:\n";
     for (const std::string& d : e.differences) out += "  " + d + "\n";
@@ -297,17 +306,23 @@ std::string explanation_to_text(const Explanation& e) {
     const replacement::AssetAnalysis& c = *e.model.challenger;
     sections.push_back(text::defender_future(e));
     sections.push_back(text::selling_now(e));
-    sections.push_back(text::cash_flows("7. Defender", d.table, e.basis_rate(), e.stored.age_years));
+    sections.push_back(text::kept_flows(
+        fmt::format("7. Defender (year t ends at age {} + t)", e.stored.age_years), d.table,
+        e.basis_rate()));
+    sections.push_back(text::sold_flows("8. Defender", d.table));
     sections.push_back(text::euac_by_life(
-        "8. EUAC and marginal cost by more years kept: defender (* = best remaining life)", d,
-        e.review.basis, e.stored.age_years));
+        "9. EUAC and marginal cost by more years kept: defender (* = best remaining life)", d,
+        e.review.basis, e.stored.age_years,
+        text::PwCostSections{"given up now (section 6)", "section 7", "section 8"}));
     sections.push_back(text::euac_by_life(
-        "8b. EUAC and marginal cost by years kept: challenger (* = economic service life)", c,
-        e.review.basis, 0));
-    sections.push_back(text::cash_flows("9. Challenger", c.table, e.basis_rate(), 0));
+        "10. EUAC and marginal cost by years kept: challenger (* = economic service life)", c,
+        e.review.basis, 0,
+        text::PwCostSections{"its price (section 3)", "section 11", "section 12"}));
+    sections.push_back(text::kept_flows("11. Challenger", c.table, e.basis_rate()));
+    sections.push_back(text::sold_flows("12. Challenger", c.table));
     sections.push_back(text::timing(e));
   } else {
-    sections.push_back(text::section("5-10. Analysis", "  not possible: " + e.model.note + "\n"));
+    sections.push_back(text::section("5-13. Analysis", "  not possible: " + e.model.note + "\n"));
   }
   sections.push_back(text::verdict_rule(e));
   if (e.review.at_stake) sections.push_back(text::at_stake(e));

@@ -1,6 +1,8 @@
 // Rebuilding a stored analysis (see rebuild.h).
 #include "explain/rebuild.h"
 
+#include <cctype>
+
 #include <type_traits>
 
 #include <fmt/format.h>
@@ -81,6 +83,23 @@ review::AssetReview recompute(const results::AssetRow& stored, const review::Cla
   return review::judge(0, rebuild_defender_inputs(stored, model), model, policy);
 }
 
+namespace {
+
+// "9,560.65" -> "9560.65": a run stored before the reasons wrote money with thousands separators
+// (as the tables do) gave the same reason.
+std::string without_thousands_separators(const std::string& reason) {
+  std::string out;
+  for (std::size_t i = 0; i < reason.size(); ++i) {
+    const bool separator = reason[i] == ',' && i > 0 && i + 1 < reason.size() &&
+                           std::isdigit(static_cast<unsigned char>(reason[i - 1])) &&
+                           std::isdigit(static_cast<unsigned char>(reason[i + 1]));
+    if (!separator) out += reason[i];
+  }
+  return out;
+}
+
+}  // namespace
+
 std::vector<std::string> differences(const results::AssetRow& stored,
                                      const review::AssetReview& again) {
   std::vector<std::string> out;
@@ -94,7 +113,10 @@ std::vector<std::string> differences(const results::AssetRow& stored,
   compare(out, "replace_after_years", stored.replace_after_years,
           d ? std::optional<Years>(d->timing.keep_years) : std::nullopt);
   compare(out, "verdict", std::optional(stored.verdict), std::optional(again.finding.verdict));
-  compare(out, "reason", std::optional(stored.reason), std::optional(again.finding.reason));
+  if (without_thousands_separators(stored.reason) !=
+      without_thousands_separators(again.finding.reason)) {
+    compare(out, "reason", std::optional(stored.reason), std::optional(again.finding.reason));
+  }
   compare(out, "basis", std::optional(stored.basis), std::optional(again.basis));
   compare(out, "book_value_now", std::optional<Money>(stored.book_value_now),
           std::optional<Money>(again.book_value_now));

@@ -1,4 +1,4 @@
-// Section 12 of `tenure explain`: what is at stake (review/at_stake.h, SPEC 11), each figure as
+// Section 15 of `tenure explain`: what is at stake (review/at_stake.h, SPEC 11), each figure as
 // its formula, then with the run's numbers put in it, then its value.
 #include <algorithm>
 #include <cmath>
@@ -16,9 +16,11 @@ using formats::percent;
 
 namespace {
 
-// "  name = formula\n" then "    = numbers = value\n".
+// "  name = formula\n" then "    = numbers = value\n", wrapped at the line width.
 std::string figure(const char* name, const std::string& formula, const std::string& numbers) {
-  return fmt::format("  {} = {}\n    = {}\n", name, formula, numbers);
+  return formats::wrap_words(fmt::format("{} = {}", name, formula), formats::kLineWidth, "  ",
+                             "    ") +
+         formats::wrap_words(numbers, formats::kLineWidth, "    = ", "      ");
 }
 
 }  // namespace
@@ -33,7 +35,7 @@ std::string at_stake(const Explanation& e) {
   const bool taxed = d.basis == replacement::Basis::after_tax;
   std::string body;
 
-  body += figure("cost of waiting a year", "T(k*+1) - T(k*), from section 10",
+  body += figure("cost of waiting a year", "T(k*+1) - T(k*), from section 13",
                  s.delay_cost ? fmt::format("T({}) - T({}) = {} - {} = {}", k + 1, k,
                                             money(t[k + 1]), money(t[k]), money(*s.delay_cost))
                               : "none: k* is the last year weighed");
@@ -85,14 +87,14 @@ std::string at_stake(const Explanation& e) {
                                    percent(e.policy->review_margin), s.close_call ? "yes" : "no")
                      : "no break-even price: no");
   body +=
-      "  T(k): present worth of keeping k more years, then the challenger forever (section 10).\n"
+      "  T(k): present worth of keeping k more years, then the challenger forever (section 13).\n"
       "  D*, C*: the least EUACs of defender and challenger on the basis; the challenger's EUAC(n)\n"
       "  = alpha_n P + beta_n at price P, the defender's EUAC(k) = f a_k + b_k with its operating\n"
       "  costs times f. The break-evens are where replacing now and keeping cost the same.\n";
   if (taxed) {
     body += "  A repair is expensed: its tax deduction comes at the end of year 1.\n";
   }
-  return section(fmt::format("12. What is at stake ({} basis, present worth at {})",
+  return section(fmt::format("15. What is at stake ({} basis, present worth at {})",
                              basis_words(d.basis), percent(i)),
                  body);
 }

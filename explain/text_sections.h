@@ -2,6 +2,7 @@
 // class and its verdict) and analysis_text.cpp (the year-by-year tables). Internal to explain/.
 #pragma once
 
+#include <optional>
 #include <string>
 
 #include "depreciation/method.h"
@@ -29,10 +30,24 @@ std::string at_stake(const Explanation& e);
 // The year-by-year tables (analysis_text.cpp); they need the recomputed defender analysis.
 std::string defender_future(const Explanation& e);
 std::string selling_now(const Explanation& e);
-std::string cash_flows(const std::string& who, const replacement::AfterTaxTable& table,
-                       Rate rate, Years age);
+// The after-tax cost of each year kept, with its present worth at `rate`; a sale at each year's
+// end.
+std::string kept_flows(const std::string& who, const replacement::AfterTaxTable& table, Rate rate);
+std::string sold_flows(const std::string& who, const replacement::AfterTaxTable& table);
+// The sections a PW of cost is reconciled with: where the money at the start comes from, the
+// years kept and the years sold.
+struct PwCostSections {
+  std::string start;  // "given up now (section 6)"
+  std::string kept;   // "section 7"
+  std::string sold;   // "section 8"
+};
+// The note under an EUAC table that ties its PW of cost to the cash-flow tables, with the numbers
+// of n = 2 put in it.
+std::string pw_cost_tie(const replacement::AssetAnalysis& a, const PwCostSections& from);
+// The EUAC table, its formulas, and, when `tie` is given and the basis is after tax, the tie.
 std::string euac_by_life(const std::string& title, const replacement::AssetAnalysis& a,
-                         replacement::Basis basis, Years age);
+                         replacement::Basis basis, Years age,
+                         const std::optional<PwCostSections>& tie);
 std::string timing(const Explanation& e);
 
 }  // namespace tenure::explain::text

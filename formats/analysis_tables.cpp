@@ -14,49 +14,62 @@ std::string basis_words(replacement::Basis basis) {
 
 std::string marked(Money amount, bool best) { return money(amount) + (best ? " *" : "  "); }
 
-std::string cash_flow_tables(const std::string& who, const replacement::AfterTaxTable& flows,
-                             const AuditFigures& audit) {
+std::string kept_cash_flows(const std::string& who, const replacement::AfterTaxTable& flows,
+                            const AuditFigures& audit) {
   std::vector<std::string> headers{"year"};
-  if (audit.age_at_start) headers.push_back("age at end");
-  headers.insert(headers.end(), {"operating cost", "depreciation", "book value", "taxable income",
-                                 "income tax", "after-tax cash flow"});
-  if (const auto rate = audit.present_worth_rate) {
-    headers.push_back("present worth at " + percent(*rate));
-  }
+  if (audit.age_at_start) headers.push_back("age at\nend");
+  headers.insert(headers.end(), {"operating\ncost", "depreciation", "book\nvalue",
+                                 "taxable\nincome", "income\ntax", "after-tax\ncost"});
+  if (const auto rate = audit.present_worth_rate) headers.push_back("PW at\n" + percent(*rate));
   TextTable kept(headers);
-  TextTable sold({"year", "market value", "depreciation", "book value", "gain", "disposal tax",
-                  "net proceeds", "after-tax cash flow"});
   for (const replacement::AfterTaxYear& year : flows.years) {
     const tax::YearFlow& k = year.kept;
     std::vector<std::string> row{std::to_string(k.year)};
     if (const auto age = audit.age_at_start) row.push_back(std::to_string(*age + k.year));
     row.insert(row.end(),
                {money(k.operating_cost), money(k.depreciation), money(k.book_value),
-                money(k.taxable_income), money(k.income_tax), money(k.after_tax_cash_flow)});
+                money(k.taxable_income), money(k.income_tax), money(-k.after_tax_cash_flow)});
     if (const auto rate = audit.present_worth_rate) {
-      row.push_back(money(k.after_tax_cash_flow * interest::pf(*rate, k.year)));
+      row.push_back(money(-k.after_tax_cash_flow * interest::pf(*rate, k.year)));
     }
     kept.add_row(std::move(row));
-    sold.add_row({std::to_string(k.year), money(year.sale.market_value),
-                  money(year.sold.depreciation), money(year.sale.book_value), money(year.sale.gain),
-                  money(year.sale.tax), money(year.sale.net_proceeds),
-                  money(year.sold.after_tax_cash_flow)});
   }
   return fmt::format(
-      "{0}: after-tax cash flows of each year kept past its end (what the owner receives; a "
-      "cost is negative)\n{1}\n{0}: if sold at the end of the year (that year takes the "
-      "disposal-year deduction)\n{2}",
-      who, kept.render(), sold.render());
+      "{}: after-tax cost of each year kept past its end\n{}  after-tax cost = operating cost + "
+      "income tax; money is positive for cost: a negative tax is saved\n",
+      who, kept.render());
+}
+
+std::string sold_cash_flows(const std::string& who, const replacement::AfterTaxTable& flows) {
+  TextTable sold({"year", "market\nvalue", "depreciation", "book\nvalue", "gain", "disposal\ntax",
+                  "net\nproceeds", "after-tax\ncost"});
+  for (const replacement::AfterTaxYear& year : flows.years) {
+    sold.add_row({std::to_string(year.kept.year), money(year.sale.market_value),
+                  money(year.sold.depreciation), money(year.sale.book_value), money(year.sale.gain),
+                  money(year.sale.tax), money(year.sale.net_proceeds),
+                  money(-year.sold.after_tax_cash_flow)});
+  }
+  return fmt::format(
+      "{}: if sold at the end of the year (that year takes the disposal-year deduction)\n{}"
+      "  net proceeds = market value - disposal tax, money received; after-tax cost as when kept\n",
+      who, sold.render());
+}
+
+std::string cash_flow_tables(const std::string& who, const replacement::AfterTaxTable& flows,
+                             const AuditFigures& audit) {
+  return kept_cash_flows(who, flows, audit) + "\n" + sold_cash_flows(who, flows);
 }
 
 std::string life_curve_table(const replacement::AssetAnalysis& asset, const AuditFigures& audit) {
-  std::vector<std::string> headers{"years kept"};
-  if (audit.age_at_start) headers.push_back("age at end");
+  std::vector<std::string> headers{"years\nkept"};
+  if (audit.age_at_start) headers.push_back("age at\nend");
   if (const auto basis = audit.pw_cost_basis) {
-    headers.push_back("PW of cost, " + basis_words(*basis));
+    headers.push_back("PW of cost,\n" + basis_words(*basis));
   }
-  headers.insert(headers.end(), {"EUAC before tax", "marginal cost before tax"});
-  if (asset.after_tax) headers.insert(headers.end(), {"EUAC after tax", "marginal cost after tax"});
+  headers.insert(headers.end(), {"EUAC\nbefore tax", "marginal cost\nbefore tax"});
+  if (asset.after_tax) {
+    headers.insert(headers.end(), {"EUAC\nafter tax", "marginal cost\nafter tax"});
+  }
   TextTable table(headers);
   const replacement::LifeCurve& before = asset.before_tax.curve;
   for (std::size_t n = 0; n < before.euac.size(); ++n) {

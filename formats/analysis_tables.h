@@ -5,10 +5,11 @@
 //
 //   std::string flows = cash_flow_tables("Defender", result.defender->table);
 //   std::string curve = life_curve_table(*result.defender);
-//   //   years kept   EUAC before tax   marginal cost before tax   EUAC after tax   ...
-//   //            1       1,234.56 *                  1,234.56       1,000.00 *    ...
-//   AuditFigures audit{.age_at_start = 4, .present_worth_rate = 0.075};
-//   flows = cash_flow_tables("7. Defender", defender.table, audit);   // two more columns
+//   //   years           EUAC   marginal cost          EUAC   marginal cost
+//   //    kept     before tax      before tax     after tax       after tax
+//   //       1     1,234.56 *        1,234.56    1,000.00 *        1,000.00
+//   AuditFigures audit{.present_worth_rate = 0.075};
+//   flows = kept_cash_flows("7. Defender", defender.table, audit);   // one more column, PW
 #pragma once
 
 #include <optional>
@@ -31,8 +32,8 @@ struct AuditFigures {
   // The asset's age when the analysis starts: a column "age at end" (age + year) after the year
   // in the cash flows kept and in the EUAC table.
   std::optional<Years> age_at_start = std::nullopt;
-  // The cash flows kept get a last column "present worth at <rate>": each year's after-tax cash
-  // flow discounted to now at this rate.
+  // The cash flows kept get a last column "PW at <rate>": each year's after-tax cost discounted
+  // to now at this rate.
   std::optional<Rate> present_worth_rate = std::nullopt;
   // The EUAC table gets a column "PW of cost, <basis>" before the EUACs: the present worth of
   // the cost of keeping n years on this basis.
@@ -41,11 +42,17 @@ struct AuditFigures {
   bool gain_on_sale = false;
 };
 
-// Two titled tables, each title starting with `who`: the after-tax cash flows of each year kept
-// past its end (year, operating cost, depreciation, book value, taxable income, income tax,
-// after-tax cash flow), then those of a sale at the end of each year, which takes the
-// disposal-year deduction (year, market value, depreciation, book value, gain, disposal tax, net
-// proceeds, after-tax cash flow).
+// The after-tax cost of each year kept past its end (year, operating cost, depreciation, book
+// value, taxable income, income tax, after-tax cost = operating cost + income tax), titled
+// "<who>: after-tax cost of each year kept past its end", with a line on the signs under it.
+// Money is positive for cost, as everywhere: a negative income tax is tax saved.
+std::string kept_cash_flows(const std::string& who, const replacement::AfterTaxTable& flows,
+                            const AuditFigures& audit = {});
+// A sale at the end of each year, which takes the disposal-year deduction (year, market value,
+// depreciation, book value, gain, disposal tax, net proceeds received, after-tax cost of the
+// year), titled "<who>: if sold at the end of the year ...", with a line on the signs under it.
+std::string sold_cash_flows(const std::string& who, const replacement::AfterTaxTable& flows);
+// The two above, a blank line between them.
 std::string cash_flow_tables(const std::string& who, const replacement::AfterTaxTable& flows,
                              const AuditFigures& audit = {});
 

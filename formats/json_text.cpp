@@ -6,6 +6,9 @@
 // per member: a policy of 40,000 classes took seconds, 200,000 minutes.)
 #include "formats/json_text.h"
 
+#include <algorithm>
+#include <cmath>
+#include <cstdlib>
 #include <set>
 #include <string>
 #include <vector>
@@ -116,6 +119,45 @@ json parse_json_text(std::string_view text) {
   json::sax_parse(text, &reader, json::input_format_t::json, /*strict=*/true,
                   /*ignore_comments=*/true);
   return json::parse(text, nullptr, /*allow_exceptions=*/true, /*ignore_comments=*/true);
+}
+
+double without_float_noise(double value) {
+  if (!std::isfinite(value) || value == 0) return value;
+  const double short_form = std::strtod(fmt::format("{:.12g}", value).c_str(), nullptr);
+  double low = value;
+  double high = value;
+  for (int ulp = 0; ulp < kNoiseUlps; ++ulp) {
+    low = std::nextafter(low, -INFINITY);
+    high = std::nextafter(high, INFINITY);
+  }
+  return short_form >= low && short_form <= high ? short_form : value;
+}
+
+namespace {
+
+void remove_float_noise(json& node) {
+  if (node.is_number_float()) {
+    node = without_float_noise(node.get<double>());
+  } else if (node.is_structured()) {
+    for (json& child : node) remove_float_noise(child);
+  }
+}
+
+}  // namespace
+
+std::string json_output(const json& document, int indent,
+                        std::initializer_list<std::string_view> exact) {
+  json tidy = document;
+  if (tidy.is_object()) {
+    for (auto member = tidy.begin(); member != tidy.end(); ++member) {
+      if (std::find(exact.begin(), exact.end(), member.key()) == exact.end()) {
+        remove_float_noise(member.value());
+      }
+    }
+  } else {
+    remove_float_noise(tidy);
+  }
+  return tidy.dump(indent, ' ', false, json::error_handler_t::replace);
 }
 
 }  // namespace tenure::formats

@@ -12,6 +12,7 @@
 #include "app/case_run.h"
 #include "core/errors.h"
 #include "core/version.h"
+#include "formats/json_text.h"
 #include "plugin/review_call.h"
 
 namespace tenure::plugin {
@@ -90,7 +91,7 @@ int tenure_case_json(const char* case_json, char** result_json, char** error_mes
   return guarded_call(error_message, [&] {
     tenure::plugin::require_pointer(case_json, "case_json");
     tenure::plugin::require_pointer(result_json, "result_json");
-    const std::string json = tenure::app::case_result_json(case_json).dump(2);
+    const std::string json = tenure::formats::json_output(tenure::app::case_result_json(case_json));
     *result_json = tenure::plugin::copy(json);
     if (*result_json == nullptr) throw std::bad_alloc();
   });

@@ -31,6 +31,7 @@
 //
 // Deterministic and innocuous: the result depends on the argument only.
 #include "app/case_run.h"
+#include "formats/json_text.h"
 #include "plugin/functions.h"
 #include "plugin/sql_arguments.h"
 
@@ -44,7 +45,8 @@ const Signature kCase{"tenure_case", {"case_json"}};
 void case_function(sqlite3_context* context, int argc, sqlite3_value** argv) {
   guarded(context, kCase, [&] {
     const Arguments args(kCase, argc, argv);
-    const std::string json = app::case_result_json(args.text("case_json")).dump();
+    const std::string json =
+        formats::json_output(app::case_result_json(args.text("case_json")), -1);
     sqlite3_result_text(context, json.data(), static_cast<int>(json.size()), SQLITE_TRANSIENT);
   });
 }

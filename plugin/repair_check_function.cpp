@@ -31,6 +31,7 @@
 // only from top-level SQL, never from a view, a trigger or a schema someone else wrote.
 #include "app/repair_check.h"
 #include "db/connection.h"
+#include "formats/json_text.h"
 #include "formats/repair_output.h"
 #include "plugin/functions.h"
 #include "plugin/sql_arguments.h"
@@ -58,7 +59,8 @@ app::RepairCheck checked(sqlite3_context* context, const Arguments& args) {
 void repair_check_function(sqlite3_context* context, int argc, sqlite3_value** argv) {
   guarded(context, kRepairCheck, [&] {
     const Arguments args(kRepairCheck, argc, argv);
-    const std::string json = formats::repair_check_to_json(checked(context, args)).dump();
+    const std::string json =
+        formats::json_output(formats::repair_check_to_json(checked(context, args)), -1);
     sqlite3_result_text(context, json.data(), static_cast<int>(json.size()), SQLITE_TRANSIENT);
   });
 }

@@ -64,13 +64,14 @@ std::string due_list(const PageModel& m) {
          "class=\"new\">new</span> marks an asset that was not due in the previous run, <span "
          "class=\"close\">close call</span> one whose break-even price is within the review "
          "margin of a new unit's price.</p>";
-  std::string items;
+  std::string first;  // the most urgent kOpenDueRows, shown
+  std::string rest;   // the others, folded
   const std::size_t shown = std::min(m.due.size(), kMaxDueRows);
   for (std::size_t i = 0; i < shown; ++i) {
     const DueAsset& due = m.due[i];
     const results::AssetRow& a = *due.stored;
     // One <tbody> per asset: its figures, then its reason across the whole width.
-    items += fmt::format(
+    (i < kOpenDueRows ? first : rest) += fmt::format(
         "<tbody class=\"item\"><tr><td class=\"id\">{}{}</td><td class=\"id\">{}</td>"
         "<td>{}{}{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td><td class=\"num\">"
         "{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td>"
@@ -86,13 +87,22 @@ std::string due_list(const PageModel& m) {
         money_cell(a.challenger_euac), money_cell(a.marginal_cost_next_year), replace_words(a),
         money_cell(a.delay_cost), money_cell(a.repair_limit), escape(a.reason));
   }
-  out += fmt::format(
-      "<table class=\"due\"><thead><tr><th>Asset</th><th>Class</th><th>Verdict</th>"
-      "<th class=\"num\">Age</th><th class=\"num\">Economic life</th><th class=\"num\">Least "
-      "EUAC if kept</th><th class=\"num\">Least EUAC of a new unit</th><th class=\"num\">Next "
-      "year's marginal cost</th><th class=\"num\">Replace</th><th class=\"num\">Waiting a "
-      "year costs</th><th class=\"num\">Repair limit</th></tr></thead>{}</table>",
-      items);
+  const auto table = [](const std::string& items) {
+    return fmt::format(
+        "<table class=\"due\"><thead><tr><th>Asset</th><th>Class</th><th>Verdict</th>"
+        "<th class=\"num\">Age</th><th class=\"num\">Economic life</th><th class=\"num\">"
+        "Least EUAC if kept</th><th class=\"num\">Least EUAC of a new unit</th><th "
+        "class=\"num\">Next year's marginal cost</th><th class=\"num\">Replace</th><th "
+        "class=\"num\">Waiting a year costs</th><th class=\"num\">Repair limit</th></tr>"
+        "</thead>{}</table>",
+        items);
+  };
+  out += table(first);
+  if (shown > kOpenDueRows) {
+    out += fmt::format("<details class=\"more-due\" id=\"due-more\"><summary>The other {} due "
+                       "assets, less urgent (click to open)</summary>{}</details>",
+                       shown - kOpenDueRows, table(rest));
+  }
   if (shown < m.due.size()) {
     out += fmt::format("<p>{} more due assets are not listed here; the view "
                        "<code>tenure_due</code> holds them all.</p>",
@@ -114,20 +124,22 @@ std::string due_charts(const PageModel& m) {
       "is what keeping the unit each further year adds ({}); the dashed line is what a new unit "
       "costs a year at its economic life. Where the solid line stays above the dashed one, "
       "another year costs more than a new unit. The dotted line marks the cheapest moment to "
-      "replace.</p><div class=\"cards\">",
+      "replace. Each card opens with a click on its line.</p><div class=\"cards\">",
       m.after_tax() ? "after tax" : "before tax");
   const std::size_t shown = std::min(m.due.size(), kMaxAssetCharts);
   for (std::size_t i = 0; i < shown; ++i) {
     const DueAsset& due = m.due[i];
     const results::AssetRow& a = *due.stored;
-    out += fmt::format("<article class=\"card\" id=\"due-{}\"><h3>{} {}{}</h3><p class=\"sub\">{} "
-                       "&middot; age {} &middot; economic life {} &middot; replace {}</p>",
+    // Closed until clicked: the summary line names the asset, the chart and reason are inside.
+    out += fmt::format("<details class=\"card\" id=\"due-{}\"><summary><h3>{} {}{}</h3>"
+                       "<p class=\"sub\">{} &middot; age {} &middot; economic life {} &middot; "
+                       "replace {}</p></summary>",
                        i, escape(a.asset_id), verdict_badge(a.verdict),
                        due.newly_due ? "<span class=\"new\">new</span>" : "",
                        escape(a.asset_class), a.age_years, years_cell(a.class_esl_years),
                        replace_words(a));
     if (due.again && due.again->defender && due.again->decision) out += marginal_chart(due);
-    out += "<p class=\"reason\">" + escape(a.reason) + "</p></article>";
+    out += "<p class=\"reason\">" + escape(a.reason) + "</p></details>";
   }
   out += "</div>";
   if (shown < m.due.size()) {

@@ -47,13 +47,21 @@ struct PageModel {
 // The pieces of the page, in page order.
 std::string page_style();
 std::string run_header(const PageModel& m);
-std::string fleet_glance(const PageModel& m);
 std::string caution_box();
-std::string class_sections(const PageModel& m);
+// How to read the figures, folded in a <details> near the top.
+std::string glossary(const PageModel& m);
+// Links to every section and class below (their ids).
+std::string contents(const PageModel& m);
+std::string fleet_glance(const PageModel& m);
+// Per class: the units due and the price of a new unit times them, with the total.
+std::string capital_summary(const PageModel& m);
 std::string due_list(const PageModel& m);
+std::string class_sections(const PageModel& m);
+// One card per due asset (up to kMaxAssetCharts), each a closed <details> with the asset in its
+// summary line and its chart inside.
 std::string due_charts(const PageModel& m);
 std::string rejected_rows(const PageModel& m);
-std::string reading_guide(const PageModel& m);
+std::string footer(const PageModel& m);
 
 // "<span class=\"badge replace\">REPLACE</span>" for replace, and so on.
 std::string verdict_badge(review::Verdict verdict);

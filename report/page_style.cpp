@@ -74,6 +74,19 @@ figcaption { font-size: 12.5px; color: var(--muted); margin-top: 4px; }
 .card .sub { font-size: 12.5px; color: var(--muted); margin: 0 0 6px; }
 .card p.reason { font-size: 12.5px; margin: 6px 0 0; color: #34404c; }
 .card svg.chart { border: 0; }
+.card > summary { cursor: pointer; }
+.card > summary > h3 { display: inline-flex; }
+.card > summary > .sub { margin: 2px 0 0 18px; }
+.card:not([open]) { padding: 6px 10px; }
+.card[open] { grid-column: 1 / -1; max-width: 560px; }
+details.glossary > summary, details.more-due > summary { cursor: pointer;
+  font-weight: 600; }
+details.more-due { margin-top: 10px; }
+nav#contents ol { margin: 4px 0; }
+nav#contents ol ol { display: inline; padding: 0; }
+nav#contents ol ol li { display: inline; margin-left: 12px; }
+table.capital tfoot th, table.capital tfoot td { border-top: 2px solid var(--line);
+  font-weight: 600; }
 dl.guide { display: grid; grid-template-columns: max-content 1fr; gap: 4px 16px; font-size: 14px; }
 dl.guide dt { font-weight: 600; } dl.guide dd { margin: 0; }
 footer { margin-top: 32px; font-size: 12px; color: var(--muted); border-top: 1px solid var(--line);

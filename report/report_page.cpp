@@ -85,10 +85,10 @@ std::string render_report(const ReportData& data) {
       "style-src 'unsafe-inline'; img-src data:\">\n"
       "<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n"
       "<meta name=\"generator\" content=\"tenure {}\">\n<title>{}</title>\n<style>{}</style>\n"
-      "</head>\n<body>\n<main>\n{}{}{}{}{}{}{}{}</main>\n</body>\n</html>\n",
-      escape(data.run.tenure_version), escape(title), page_style(), run_header(m), fleet_glance(m),
-      caution_box(), class_sections(m), due_list(m), due_charts(m), rejected_rows(m),
-      reading_guide(m));
+      "</head>\n<body>\n<main>\n{}{}{}{}{}{}{}{}{}{}{}</main>\n</body>\n</html>\n",
+      escape(data.run.tenure_version), escape(title), page_style(), run_header(m), caution_box(),
+      glossary(m), contents(m), fleet_glance(m), capital_summary(m), due_list(m),
+      class_sections(m), due_charts(m), rejected_rows(m), footer(m));
 }
 
 }  // namespace tenure::report

@@ -22,6 +22,8 @@ namespace tenure::report {
 // The due list shows at most this many assets and the per-asset charts at most kMaxAssetCharts,
 // the most urgent first; the page says how many more there are (all are in tenure_due).
 inline constexpr std::size_t kMaxDueRows = 1000;
+// The due list shows the most urgent this many; the others are folded in a <details> under it.
+inline constexpr std::size_t kOpenDueRows = 25;
 inline constexpr std::size_t kMaxAssetCharts = 200;
 // Rejected rows listed in the page (the count is always complete).
 inline constexpr std::size_t kMaxRejectedRows = 20;

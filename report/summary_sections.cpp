@@ -1,5 +1,8 @@
-// The report's run header, fleet summary, caution, rejected rows and reading guide (see
-// page_model.h).
+// The report's run header, caution, glossary, contents, fleet summary, capital for the units
+// due, rejected rows and footer (see page_model.h).
+#include <algorithm>
+#include <map>
+
 #include <fmt/format.h>
 
 #include "explain/explanation.h"
@@ -7,6 +10,7 @@
 #include "formats/text_table.h"
 #include "report/html.h"
 #include "report/page_model.h"
+#include "report/report_page.h"
 
 namespace tenure::report {
 namespace {
@@ -152,10 +156,12 @@ std::string rejected_rows(const PageModel& m) {
   return out + "</section>";
 }
 
-std::string reading_guide(const PageModel& m) {
+std::string glossary(const PageModel& m) {
   const results::RunRow& run = m.data->run;
   return fmt::format(
-      "<section id=\"guide\"><h2>How to read the figures</h2><dl class=\"guide\">"
+      "<section id=\"guide\"><details class=\"glossary\"><summary>How to read the figures: "
+      "EUAC, economic life, defender, marginal cost, k*, verdicts, what is at stake</summary>"
+      "<dl class=\"guide\">"
       "<dt>EUAC</dt><dd>Equivalent uniform annual cost: everything owning a unit for a given "
       "number of years costs (purchase or the sale given up, running costs, taxes, less what "
       "selling it then brings), spread evenly over those years at the MARR.</dd>"
@@ -176,11 +182,84 @@ std::string reading_guide(const PageModel& m) {
       "making rather than replacing. Break-even price: the price of a new unit at which "
       "replacing now and keeping cost the same; a close call when it is within the review "
       "margin of the price.</dd>"
+      "<dt>Capital</dt><dd>The price of a new unit of the class (its challenger's first cost) "
+      "times the units due: what replacing them would take, before any sale of the old "
+      "ones.</dd>"
       "<dt>Auditing one unit</dt><dd><code>tenure explain --db DATABASE ASSET --run {}</code> "
-      "shows every input, table and step behind its verdict.</dd></dl></section>"
+      "shows every input, table and step behind its verdict.</dd></dl></details></section>",
+      run.run_id);
+}
+
+std::string contents(const PageModel& m) {
+  std::string classes;
+  for (std::size_t i = 0; i < m.data->classes.size(); ++i) {
+    classes += fmt::format("<li><a href=\"#class-{}\">{}</a></li>", i,
+                           escape(m.data->classes[i].asset_class));
+  }
+  const std::size_t cards = std::min(m.due.size(), kMaxAssetCharts);
+  return fmt::format(
+      "<nav id=\"contents\" aria-label=\"Contents\"><h2>Contents</h2><ol>"
+      "<li><a href=\"#guide\">How to read the figures</a></li>"
+      "<li><a href=\"#glance\">The fleet at a glance</a></li>"
+      "<li><a href=\"#capital\">Capital for the units due, by class</a></li>"
+      "<li><a href=\"#due\">Due: {} assets to review or replace</a></li>"
+      "<li><a href=\"#classes\">Classes: economic life and the fleet's ages</a><ol>{}</ol></li>"
+      "<li><a href=\"#due-charts\">Each due asset: keep another year? ({} cards, each opened "
+      "by a click)</a></li>"
+      "<li><a href=\"#rejected\">Input rows rejected</a></li></ol></nav>",
+      m.due.size(), classes, cards);
+}
+
+std::string capital_summary(const PageModel& m) {
+  struct Due {
+    std::size_t replace = 0, review = 0;
+  };
+  std::map<std::string, Due, std::less<>> by_class;
+  for (const DueAsset& due : m.due) {
+    Due& d = by_class[due.stored->asset_class];
+    ++(due.stored->verdict == review::Verdict::replace ? d.replace : d.review);
+  }
+  std::string rows;
+  Due total;
+  Money replace_capital = 0;
+  Money due_capital = 0;
+  for (const results::ClassRow& c : m.data->classes) {
+    const auto found = by_class.find(c.asset_class);
+    const Due d = found == by_class.end() ? Due{} : found->second;
+    const Money price = c.challenger_first_cost;
+    const auto count = [](std::size_t n) { return static_cast<double>(n); };
+    total.replace += d.replace;
+    total.review += d.review;
+    replace_capital += count(d.replace) * price;
+    due_capital += count(d.replace + d.review) * price;
+    rows += fmt::format(
+        "<tr><td class=\"id\"><a href=\"#class-{}\">{}</a></td><td class=\"num\">{}</td>"
+        "<td class=\"num\">{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td>"
+        "<td class=\"num\">{}</td></tr>",
+        &c - m.data->classes.data(), escape(c.asset_class), d.replace, d.review,
+        formats::money(price), formats::money(count(d.replace) * price),
+        formats::money(count(d.replace + d.review) * price));
+  }
+  return fmt::format(
+      "<section id=\"capital\"><h2>Capital for the units due, by class</h2><p>What replacing "
+      "the units due would take at the price of a new unit of each class (the challenger's first "
+      "cost), before any sale of the old ones: the units to replace now, and all units due "
+      "(replace and review).</p><table class=\"capital\"><thead><tr><th>Class</th>"
+      "<th class=\"num\">Replace</th><th class=\"num\">Review</th><th class=\"num\">New "
+      "unit: price</th><th class=\"num\">Capital to replace now</th><th class=\"num\">Capital "
+      "for all due</th></tr></thead><tbody>{}</tbody><tfoot><tr><th>Total</th>"
+      "<td class=\"num\">{}</td><td class=\"num\">{}</td><td></td><td class=\"num\">{}</td>"
+      "<td class=\"num\">{}</td></tr></tfoot></table></section>",
+      rows, total.replace, total.review, formats::money(replace_capital),
+      formats::money(due_capital));
+}
+
+std::string footer(const PageModel& m) {
+  const results::RunRow& run = m.data->run;
+  return fmt::format(
       "<footer>Generated by tenure {} from review run {} (started {}, finished {}); policy "
       "SHA-256 {}. Every figure here is stored in the database's tenure_* tables.</footer>",
-      run.run_id, escape(run.tenure_version), run.run_id, escape(run.started_at),
+      escape(run.tenure_version), run.run_id, escape(run.started_at),
       escape(run.finished_at.value_or("")), escape(run.policy_sha256));
 }
 

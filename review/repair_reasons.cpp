@@ -7,7 +7,6 @@
 
 namespace tenure::review {
 
-using replacement::reason_money;
 using replacement::reason_years;
 
 std::string repair_reason(const RepairWeighing& w, Money estimate, replacement::Basis basis) {
@@ -17,19 +16,19 @@ std::string repair_reason(const RepairWeighing& w, Money estimate, replacement::
     return fmt::format(
         "Repair: the estimate of {} is within the repair limit of {} {}; repaired, keeping it {} "
         "more and then replacing it is cheapest.",
-        reason_money(estimate), reason_money(w.repair_limit), on_basis,
+        money(estimate), money(w.repair_limit), on_basis,
         reason_years(w.keep_years_if_repaired));
   }
   if (w.keep_years == 0) {
     return fmt::format(
         "Replace: even without a repair, replacing it now is cheapest {}, so its repair limit is "
         "0.00 and the estimate of {} is not worth paying.",
-        on_basis, reason_money(estimate));
+        on_basis, money(estimate));
   }
   return fmt::format(
       "Replace: the estimate of {} is above the repair limit of {} {}: paying it and keeping the "
       "unit costs more than replacing it now.",
-      reason_money(estimate), reason_money(w.repair_limit), on_basis);
+      money(estimate), money(w.repair_limit), on_basis);
 }
 
 std::string retired_reason(std::string_view asset_id, std::string_view retired_on) {

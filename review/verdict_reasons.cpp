@@ -7,7 +7,6 @@
 
 namespace tenure::review {
 
-using replacement::reason_money;
 using replacement::reason_years;
 
 std::string verdict_reason(VerdictTest test, const VerdictFigures& f, Years age,
@@ -20,15 +19,15 @@ std::string verdict_reason(VerdictTest test, const VerdictFigures& f, Years age,
                                            ? " (the last year weighed)"
                                            : "");
   const std::string euacs =
-      fmt::format("{} EUAC {} against the challenger's {}", basis, reason_money(f.defender_euac),
-                  reason_money(f.challenger_euac));
+      fmt::format("{} EUAC {} against the challenger's {}", basis, money(f.defender_euac),
+                  money(f.challenger_euac));
   switch (test) {
     case VerdictTest::replace_now:
       return fmt::format(
           "Replace: keeping it any longer costs more than a new unit; its least {} EUAC is {} "
           "against the challenger's {}, and next year's marginal cost is {}.",
-          basis, reason_money(f.defender_euac), reason_money(f.challenger_euac),
-          reason_money(f.marginal_cost_next_year));
+          basis, money(f.defender_euac), money(f.challenger_euac),
+          money(f.marginal_cost_next_year));
     case VerdictTest::past_economic_life:
       return fmt::format(
           "Review: at {} it is at or past a new unit's economic life of {}; replacing {} is "
@@ -75,7 +74,7 @@ std::string verdict_headline(const VerdictFinding& f) {
 
 std::string rule_in_words() {
   return "  replace when k* = 0; otherwise review when the age is at or past a new unit's "
-         "economic life,\n  or when k* <= the lead time; otherwise keep (k*: the years to keep "
+         "economic life,\n  or when k* <= the lead time; otherwise keep\n  (k*: the years to keep "
          "it before replacing is cheapest)\n";
 }
 

@@ -19,6 +19,7 @@
 #include "../db/db_test_support.h"
 #include "app/review_run.h"
 #include "core/errors.h"
+#include "core/money_text.h"
 #include "fixtures/fleets/fixture_fleets.h"
 #include "formats/case_json.h"
 #include "replacement/case_analysis.h"
@@ -177,10 +178,10 @@ TEST_P(RepairCheckRun, TheReasonGivesTheNumbers) {
   ASSERT_EQ(c.weighing->verdict, review::RepairVerdict::repair);
   const std::string basis = GetParam() > 0 ? "after-tax" : "before-tax";
   EXPECT_EQ(c.reason,
-            fmt::format("Repair: the estimate of 250.00 is within the repair limit of {:.2f} on "
+            fmt::format("Repair: the estimate of 250.00 is within the repair limit of {} on "
                         "{} {} basis; repaired, keeping it {} year{} more and then replacing it "
                         "is cheapest.",
-                        c.weighing->repair_limit, GetParam() > 0 ? "an" : "a", basis,
+                        tenure::money(c.weighing->repair_limit), GetParam() > 0 ? "an" : "a", basis,
                         c.weighing->keep_years, c.weighing->keep_years == 1 ? "" : "s"));
 }
 

@@ -3,6 +3,7 @@
 //   node tests/browser/check_report.mjs REPORT.html SHOT.png [SECTION_SHOTS_DIR]
 //   {"console_errors": [], "page_errors": [], "requests": ["file:///.../REPORT.html"],
 //    "charts": 14, "blank_charts": 0, "scripts": 0, "title": "...", "caution": true,
+//    "page_height": 5200,
 //    "screenshot": {"file": "SHOT.png", "width": 1280, "height": 2000, "colours": 913,
 //                   "non_white": 0.41}}
 // With SECTION_SHOTS_DIR it also saves one PNG per <section> (for a person to look at).
@@ -105,6 +106,8 @@ try {
       }).length,
       scripts: document.querySelectorAll('script').length,
       caution: document.body.innerText.includes('decision support, not tax, accounting or legal advice'),
+      // How tall the page opens, in CSS pixels at the 1280-pixel-wide viewport.
+      page_height: document.body.scrollHeight,
     };
   }));
   await page.screenshot({ path: shotArg });

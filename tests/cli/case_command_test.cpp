@@ -8,6 +8,7 @@
 #include "cli/input_file.h"
 #include "formats/case_json.h"
 #include "formats/case_table.h"
+#include "formats/json_text.h"
 #include "run_tenure.h"
 
 namespace tenure::cli {
@@ -21,10 +22,12 @@ const char* const kFixtures[] = {"delivery_van.json", "standby_generator.json",
                                  "forklift_before_tax.json", "haul_truck_cca.json",
                                  "delivery_van_choices.json"};
 
-// What the library makes of the file, to compare the process's output with.
+// What the library makes of the file, written as every command writes JSON, to compare the
+// process's output with.
 nlohmann::json expected_json(const std::string& file) {
   const replacement::Case input = formats::read_case(testing::slurp(file));
-  return formats::case_result_to_json(input, replacement::analyse(input));
+  return nlohmann::json::parse(
+      formats::json_output(formats::case_result_to_json(input, replacement::analyse(input))));
 }
 
 TEST(CaseCommand, FixturesPrintTheLibrarysJson) {

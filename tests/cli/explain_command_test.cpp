@@ -137,9 +137,9 @@ TEST_F(ExplainCommand, TextHasItsSectionsAndEndsWithTheCaution) {
   const testing::Run r = run_tenure({"explain", "--db", path, "PF-012"});
   ASSERT_EQ(r.exit_code, 0) << r.err;
   for (const char* text : {"tenure explain: asset PF-012 (class pump-fixture), run 1 as of 2026-06-30",
-                           "are reproduced exactly", "1. Inputs", "in service on",
+                           "are reproduced\nexactly", "1. Inputs", "in service on",
                            "4. Own cost history", "the events read now agree with the run",
-                           "present worth at 7.50%", "10. Replacement timing", "11. Verdict"}) {
+                           "PW at\n", "13. Replacement timing", "14. Verdict"}) {
     EXPECT_NE(r.out.find(text), std::string::npos) << text;
   }
   EXPECT_NE(r.out.find("a regulator's retirement rule.\n"), std::string::npos);

@@ -101,9 +101,9 @@ TEST_F(RepairCommand, TextIsAFewLinesForTheCounterEndingWithTheCaution) {
       "  repair limit      {}\n"
       "  estimate          100.00 ({:.2f} net of its tax deduction, in present worth)\n"
       "  after repairing   keep it {} years more, then replace (k* = {})\n"
-      "Repair: the estimate of 100.00 is within the repair limit of {:.2f} on an after-tax basis; "
+      "Repair: the estimate of 100.00 is within the repair limit of {} on an after-tax basis; "
       "repaired, keeping it {} years more and then replacing it is cheapest.\n\n",
-      formats::money(limit), 100 * (1 - 0.25 / 1.075), years, years, limit, years);
+      formats::money(limit), 100 * (1 - 0.25 / 1.075), years, years, formats::money(limit), years);
   EXPECT_EQ(r.out, expected_head + std::string(formats::kCaution) + "\n");
 }
 

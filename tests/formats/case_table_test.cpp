@@ -31,9 +31,10 @@ TEST(CaseTable, HasEverySection) {
   const std::string text = table_of(kCase);
   for (const char* heading :
        {"Rates used", "Decision basis: after-tax", "Challenger: EUAC and marginal cost",
-        "Challenger: after-tax cash flows", "Challenger: if sold at the end of the year",
+        "Challenger: after-tax cost of each year kept",
+        "Challenger: if sold at the end of the year",
         "Defender: its opportunity cost", "Defender: EUAC and marginal cost",
-        "Defender: after-tax cash flows", "Replacement timing",
+        "Defender: after-tax cost of each year kept", "Replacement timing",
         "Decision: REVIEW (cheapest: replace after 1 year more)", "What is at stake",
         "Study period of 1 year"}) {
     EXPECT_TRUE(contains(text, heading)) << heading << "\n" << text;

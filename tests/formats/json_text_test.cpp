@@ -104,5 +104,25 @@ TEST(JsonText, ManySiblingsParse) {
   EXPECT_EQ(parse_json_text(text + "}").size(), 50000u);
 }
 
+// Float noise (issue 16): 0.07 x (1 - 0.25), the after-tax MARR of SPEC 4's default, is
+// 0.052500000000000005 in binary floating point; it is written 0.0525. A figure that is not
+// within a few units in the last place of a 12-digit decimal is written to the last bit.
+TEST(JsonOutput, WritesNumbersWithoutFloatNoise) {
+  const double after_tax_marr = 0.07 * (1 - 0.25);
+  ASSERT_NE(after_tax_marr, 0.0525);  // the noise this removes
+  EXPECT_EQ(without_float_noise(after_tax_marr), 0.0525);
+  EXPECT_EQ(without_float_noise(26447.399999999998), 26447.4);   // a book value of a demo unit
+  EXPECT_EQ(without_float_noise(1605.5999999999985), 1605.6);    // 7 units in the last place off
+  EXPECT_EQ(without_float_noise(1.0 / 3), 1.0 / 3);               // a true figure is kept
+  EXPECT_EQ(without_float_noise(9562.864132481234), 9562.864132481234);
+  EXPECT_EQ(without_float_noise(0.0), 0.0);
+  EXPECT_EQ(json_output({{"after_tax_marr", after_tax_marr}, {"years", 3}}),
+            "{\n  \"after_tax_marr\": 0.0525,\n  \"years\": 3\n}");
+  EXPECT_EQ(json_output({{"rates", {after_tax_marr, 0.1}}}, -1), "{\"rates\":[0.0525,0.1]}");
+  // A member named exact is written to the last bit.
+  EXPECT_EQ(json_output({{"a", after_tax_marr}, {"case", {{"b", after_tax_marr}}}}, -1, {"case"}),
+            "{\"a\":0.0525,\"case\":{\"b\":0.052500000000000005}}");
+}
+
 }  // namespace
 }  // namespace tenure::formats

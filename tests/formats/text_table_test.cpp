@@ -40,6 +40,33 @@ TEST(TextTable, AlignsNumbersRightAndLabelsLeft) {
             "  longer   1,000.00\n");
 }
 
+TEST(TextTable, AHeaderOfTwoLinesSitsOverItsColumn) {
+  TextTable table({"year", "present worth\nat 7.50%"});
+  table.add_row({"1", "104.65"});
+  EXPECT_EQ(table.render(),
+            "         present worth\n"
+            "  year        at 7.50%\n"
+            "     1          104.65\n");
+}
+
+TEST(TextTable, TheLastColumnWrapsAtTheLineWidth) {
+  TextTable table({"item", "meaning"}, 2);
+  table.add_row({"rate", "one two three four five six"});
+  table.wrap_last_column(20);  // "  rate   " leaves 11 columns
+  EXPECT_EQ(table.render(),
+            "  item   meaning\n"
+            "  rate   one two\n"
+            "         three four\n"
+            "         five six\n");
+}
+
+TEST(TextFormats, WrapWordsBreaksAtSpacesWithinTheWidth) {
+  EXPECT_EQ(wrap_words("aaa bbb ccc ddd", 9, "  ", "    "), "  aaa bbb\n    ccc\n    ddd\n");
+  EXPECT_EQ(wrap_words("short", 100, "  ", "    "), "  short\n");
+  // A word longer than the width stays whole on its own line.
+  EXPECT_EQ(wrap_words("x abcdefghijkl y", 6, "", ""), "x\nabcdefghijkl\ny\n");
+}
+
 TEST(TextTable, RejectsARowOfTheWrongWidth) {
   TextTable table({"a", "b"});
   EXPECT_THROW(table.add_row({"1"}), std::logic_error);

@@ -10,6 +10,7 @@
 
 #include "explain/explanation.h"
 #include "formats/caution.h"
+#include "formats/text_table.h"
 #include "report/html.h"
 #include "report/report_page.h"
 #include "tests/explain/pump_fixture.h"
@@ -174,6 +175,102 @@ TEST(ReportPage, ClassWithoutCostCurveShowsItsNoteAndNoCharts) {
   EXPECT_NE(html.find("no complete year of cost history for class &#39;pump-fixture&#39;"),
             std::string::npos);
   EXPECT_NE(html.find("No asset is due in this run."), std::string::npos);
+}
+
+// The page opens short (issue 16): caution and glossary near the top, then the contents, the
+// capital and the due list, then the class sections, then the per-unit cards, each a closed
+// <details>; every link on the page goes to an id the page has.
+TEST(ReportPage, OpensShortWithTheDueListFirstAndTheCardsFolded) {
+  const ReportData data = invented_run();
+  const std::string html = render_report(data);
+  const auto at = [&html](const std::string& what) {
+    const std::size_t found = html.find(what);
+    EXPECT_NE(found, std::string::npos) << what;
+    return found;
+  };
+  const std::size_t caution = at("id=\"caution\""), glossary = at("id=\"guide\""),
+                    toc = at("id=\"contents\""), capital = at("id=\"capital\""),
+                    due = at("id=\"due\""), classes = at("id=\"classes\""),
+                    cards = at("id=\"due-charts\"");
+  EXPECT_LT(caution, glossary);
+  EXPECT_LT(glossary, toc);
+  EXPECT_LT(toc, capital);
+  EXPECT_LT(capital, due);
+  EXPECT_LT(due, classes);
+  EXPECT_LT(classes, cards);
+  EXPECT_NE(html.find("<details class=\"glossary\"><summary>"), std::string::npos);
+  // One closed card per due asset, none open and none outside a <details>.
+  EXPECT_EQ(count(html, "<details class=\"card\" id=\"due-"), due_count(data));
+  EXPECT_EQ(count(html, "<details class=\"card\" open"), 0u);
+  EXPECT_EQ(count(html, "<article class=\"card\""), 0u);
+  // The charts of the cards are inside them.
+  const std::size_t first_card = html.find("<details class=\"card\"");
+  EXPECT_LT(first_card, html.find(">age at the end of the year kept<"));
+}
+
+TEST(ReportPage, EveryLinkGoesToAnIdOnThePage) {
+  const std::string html = render_report(invented_run());
+  std::size_t links = 0;
+  for (std::size_t at = html.find("href=\""); at != std::string::npos;
+       at = html.find("href=\"", at + 1)) {
+    const std::size_t start = at + 6;
+    const std::string target = html.substr(start, html.find('"', start) - start);
+    ASSERT_EQ(target.front(), '#') << target;  // nothing outside the page
+    EXPECT_EQ(count(html, "id=\"" + target.substr(1) + "\""), 1u) << target;
+    ++links;
+  }
+  // The contents: the glossary, the glance, capital, due list, classes, one class, cards,
+  // rejected rows; and each due asset of the list links to its card.
+  EXPECT_GE(links, 8 + due_count(invented_run()));
+  for (const char* section : {"#guide", "#glance", "#capital", "#due", "#classes", "#class-0",
+                              "#due-charts", "#rejected"}) {
+    EXPECT_NE(html.find(fmt::format("<li><a href=\"{}\">", section)), std::string::npos)
+        << section;
+  }
+}
+
+// Capital for the units due: the new unit's price (the fixture's 20,000) times the units due of
+// each verdict, counted here from the stored rows.
+TEST(ReportPage, SumsTheCapitalOfTheUnitsDue) {
+  const ReportData data = invented_run();
+  std::size_t replace = 0, review = 0;
+  for (const results::AssetRow& a : data.assets) {
+    if (a.verdict == review::Verdict::replace) ++replace;
+    if (a.verdict == review::Verdict::review) ++review;
+  }
+  ASSERT_GT(replace, 0u);
+  ASSERT_GT(review, 0u);
+  const std::string html = render_report(data);
+  const double price = explain::testing::kChallengerCost;
+  EXPECT_NE(html.find(fmt::format(
+                "<a href=\"#class-0\">pump-fixture</a></td><td class=\"num\">{}</td>"
+                "<td class=\"num\">{}</td><td class=\"num\">20,000.00</td><td class=\"num\">{}"
+                "</td><td class=\"num\">{}</td>",
+                replace, review, formats::money(replace * price),
+                formats::money((replace + review) * price))),
+            std::string::npos)
+      << html.substr(html.find("id=\"capital\""), 2000);
+  EXPECT_NE(html.find(fmt::format("<tfoot><tr><th>Total</th><td class=\"num\">{}</td>",
+                                  replace)),
+            std::string::npos);
+}
+
+// A long due list shows the most urgent kOpenDueRows and folds the others.
+TEST(ReportPage, FoldsTheLessUrgentDueAssets) {
+  ReportData data = invented_run();
+  const results::AssetRow old = asset(11, "x");
+  for (std::size_t i = 0; i < kOpenDueRows; ++i) {
+    results::AssetRow copy = old;
+    copy.asset_id = fmt::format("EXTRA-{:04}", i);
+    data.assets.push_back(copy);
+  }
+  const std::string html = render_report(data);
+  const std::size_t folded = html.find("<details class=\"more-due\" id=\"due-more\">");
+  ASSERT_NE(folded, std::string::npos);
+  EXPECT_EQ(count(html.substr(0, folded), "<tbody class=\"item\">"), kOpenDueRows);
+  EXPECT_NE(html.find(fmt::format("<summary>The other {} due assets",
+                                  due_count(data) - kOpenDueRows)),
+            std::string::npos);
 }
 
 }  // namespace

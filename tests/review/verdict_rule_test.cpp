@@ -96,29 +96,30 @@ TEST(FiguresOf, TakesTheDecisionsFiguresOnItsBasis) {
 }
 
 // The reasons are the product's words (SPEC 6: one sentence with the numbers); each expected
-// sentence is written out by hand from its row's figures.
+// sentence is written out by hand from its row's figures, money with thousands separators as
+// the tables print it (issue 16: "9,560.65", not "9560.65").
 TEST(Reasons, SayTheDecidingTestWithTheNumbers) {
   EXPECT_EQ(weigh(figures(0, 5000, 4000, 8), 2, 1).reason,
             "Replace: keeping it any longer costs more than a new unit; its least after-tax EUAC "
-            "is 5000.00 against the challenger's 4000.00, and next year's marginal cost is "
+            "is 5,000.00 against the challenger's 4,000.00, and next year's marginal cost is "
             "900.00.");
   EXPECT_EQ(weigh(figures(1, 3000, 4000, 8), 9, 1).reason,
             "Review: at 9 years it is at or past a new unit's economic life of 8 years; "
-            "replacing after 1 year more is cheapest (after-tax EUAC 3000.00 against the "
-            "challenger's 4000.00).");
+            "replacing after 1 year more is cheapest (after-tax EUAC 3,000.00 against the "
+            "challenger's 4,000.00).");
   EXPECT_EQ(weigh(figures(2, 3900, 4000, 8), 3, 2).reason,
             "Review: replacing after 2 years more is cheapest, within the lead time of 2 years, "
-            "so the replacement is to be budgeted or ordered now (after-tax EUAC 3900.00 against "
-            "the challenger's 4000.00).");
+            "so the replacement is to be budgeted or ordered now (after-tax EUAC 3,900.00 against "
+            "the challenger's 4,000.00).");
   EXPECT_EQ(weigh(figures(5, 3700, 4000, 8), 1, 1).reason,
             "Keep: at 1 year it is short of a new unit's economic life of 8 years, and replacing "
-            "after 5 years more is cheapest (after-tax EUAC 3700.00 against the challenger's "
-            "4000.00).");
+            "after 5 years more is cheapest (after-tax EUAC 3,700.00 against the challenger's "
+            "4,000.00).");
   // k* at the last year weighed (10) says so.
   EXPECT_EQ(weigh(figures(10, 3000, 4000, 12), 2, 1).reason,
             "Keep: at 2 years it is short of a new unit's economic life of 12 years, and "
             "replacing after 10 years more (the last year weighed) is cheapest (after-tax EUAC "
-            "3000.00 against the challenger's 4000.00).");
+            "3,000.00 against the challenger's 4,000.00).");
 }
 
 TEST(Headline, SaysTheVerdictAndWhen) {
