@@ -38,7 +38,7 @@ std::string decision_text(const replacement::Decision& decision,
       decision.challenger_euac_by_year.empty()
           ? fmt::format("the challenger repeated at its least EUAC {}",
                         money(decision.challenger_euac))
-          : std::string("the challenger bought after k years repeated at its least EUAC C*_k");
+          : std::string("the challenger bought after k years at its least EUAC C*_k");
   return fmt::format(
       "Replacement timing ({} basis; {}; * = best)\n"
       "{}\nDecision: {}\n  {}\n\nWhat is at stake ({} basis, present worth now)\n{}",
@@ -72,8 +72,8 @@ std::string case_result_to_table(const replacement::Case& input,
   const std::string challenger =
       result.challengers.empty()
           ? std::string("Challenger")
-          : fmt::format("Challenger '{}' (chosen)", input.challengers[result.chosen].name);
-  sections.push_back(challenger +
+          : fmt::format("Challenger '{}'", input.challengers[result.chosen].name);
+  sections.push_back(challenger + (result.challengers.empty() ? "" : " (chosen)") +
                      ": EUAC and marginal cost by years kept (* = economic service life)\n" +
                      life_curve_table(result.challenger));
   sections.push_back(cash_flow_tables(challenger, result.challenger.table));

@@ -35,6 +35,7 @@ struct AtStake {
   std::optional<Money> break_even_price;
   std::optional<double> break_even_cost_factor;
   bool close_call = false;  // rule (1)
+  bool improving = false;   // rule (2): the challengers improve, so no break-evens are given
   // Where the break-evens come from, for explain: the challenger life n and the years kept k
   // whose lines give them (replacement/break_even.h).
   std::optional<Years> break_even_price_life;

@@ -155,6 +155,7 @@ TEST(CaseChallengers, ImprovementListsTheLeastEuacByYear) {
   EXPECT_FALSE(verdict.at_stake.break_even_price.has_value());
   EXPECT_FALSE(verdict.at_stake.break_even_cost_factor.has_value());
   EXPECT_FALSE(verdict.at_stake.close_call);
+  EXPECT_TRUE(verdict.at_stake.improving);
   const auto& pw = result.decision->timing.present_worth;
   EXPECT_EQ(verdict.at_stake.early_cost,
             pw[0] - pw[static_cast<std::size_t>(result.decision->timing.keep_years)]);
