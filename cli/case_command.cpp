@@ -38,13 +38,17 @@ void add_case_command(CLI::App& app, const Console& console) {
       "The case file (JSON; // and /* */ comments allowed) gives marr and income_tax_rate,\n"
       "optionally after_tax_marr and capital_gains_tax_rate, a challenger (first_cost,\n"
       "operating_costs, market_values, depreciation), optionally a defender (the same plus\n"
-      "age_years and market_value_now) and optionally study_period_years. The result gives the\n"
-      "challenger's economic service life before and after tax, the defender's best remaining\n"
+      "age_years and market_value_now) and optionally study_period_years. Instead of one\n"
+      "challenger, challengers lists several, each with a name and an optional cost_factor on\n"
+      "its operating_costs; improvement (in [0, 1)) makes a challenger bought k years later\n"
+      "(1 - improvement)^k times as dear. The result gives each challenger's economic service\n"
+      "life before and after tax and names the one weighed, the defender's best remaining\n"
       "life and marginal costs, when to replace, and the study period's options.\n"
       "Errors name the JSON path and the rule, e.g. '$.challenger.first_cost: must be > 0'.\n"
       "\n"
       "Examples:\n"
       "  tenure case fixtures/cases/delivery_van.json\n"
+      "  tenure case fixtures/cases/delivery_van_choices.json\n"
       "  tenure case - --format json < my_case.json > result.json");
   command->callback([options, console] { run_case(*options, console); });
 }

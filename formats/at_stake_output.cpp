@@ -34,11 +34,13 @@ std::string at_stake_table(const review::AtStake& s) {
              "the largest one-time repair now still worth making rather than replacing"});
   t.add_row({"break-even price", money_or_dash(s.break_even_price),
              s.break_even_price ? "at this challenger price, replacing now and keeping cost the same"
+             : s.improving      ? "not given: new units improve, so no one price decides"
                                 : "none: no challenger price up to 1e15 makes replacing now pay"});
   t.add_row({"break-even cost factor",
              s.break_even_cost_factor ? fmt::format("{:.4f}", *s.break_even_cost_factor) : "-",
              s.break_even_cost_factor
                  ? "its operating costs times this make replacing now and keeping cost the same"
+             : s.improving ? "not given: new units improve, so no one factor decides"
                  : "none: no positive factor on its operating costs makes replacing now pay"});
   t.add_row({"close call", s.close_call ? "yes" : "no",
              "yes when the break-even price is within the review margin of the price"});

@@ -6,10 +6,12 @@
 #include "core/checks.h"
 #include "core/errors.h"
 #include "formats/analysis_json.h"
+#include "formats/challengers_output.h"
 #include "formats/depreciation_json.h"
 #include "formats/json_path.h"
 #include "formats/at_stake_output.h"
 #include "formats/json_text.h"
+#include "replacement/challengers.h"
 
 namespace tenure::formats {
 namespace {
@@ -59,6 +61,34 @@ Ownership read_challenger(const JsonObject& asset) {
   return owned;
 }
 
+// One of the several-challengers form: a named challenger, its operating costs times its
+// cost_factor (> 0, default 1).
+replacement::NamedChallenger read_named_challenger(const JsonObject& asset) {
+  asset.allow_only({"name", "first_cost", "cost_factor", "operating_costs", "market_values",
+                    "depreciation"});
+  replacement::NamedChallenger named{asset.string("name"), {}};
+  const double cost_factor = asset.optional_number("cost_factor").value_or(1);
+  require_positive(cost_factor, asset.path_of("cost_factor"));
+  Ownership& owned = named.asset;
+  owned.first_cost = first_cost(asset);
+  owned.age_years = 0;
+  owned.value_now = owned.first_cost;
+  read_years_ahead(asset, owned);
+  for (Money& cost : owned.operating_costs) cost *= cost_factor;
+  return named;
+}
+
+std::vector<replacement::NamedChallenger> read_challengers(const JsonObject& root) {
+  std::vector<replacement::NamedChallenger> challengers;
+  std::vector<std::string> names;
+  for (const JsonObject& asset : root.objects("challengers")) {
+    challengers.push_back(read_named_challenger(asset));
+    names.push_back(challengers.back().name);
+  }
+  replacement::validate_challenger_names(names, root.path_of("challengers"));
+  return challengers;
+}
+
 Ownership read_defender(const JsonObject& asset) {
   asset.allow_only({"first_cost", "age_years", "market_value_now", "operating_costs",
                     "market_values", "depreciation"});
@@ -88,6 +118,9 @@ json decision_to_json(const replacement::Decision& decision, const review::CaseV
           {"defender_best_years", decision.defender_best_years},
           {"timing", std::move(timing)}};
   out.update(at_stake_to_json(verdict.at_stake));
+  if (!decision.challenger_euac_by_year.empty()) {
+    out["challenger_by_year"] = challenger_by_year_to_json(decision);
+  }
   return out;
 }
 
@@ -109,13 +142,23 @@ replacement::Case read_case(std::string_view json_text) {
   const json document = parse_json_text(json_text);
   const JsonObject root(document, "$");
   root.allow_only({"marr", "income_tax_rate", "after_tax_marr", "capital_gains_tax_rate",
-                   "lead_time_years", "review_margin", "challenger", "defender",
-                   "study_period_years"});
+                   "lead_time_years", "review_margin", "challenger", "challengers",
+                   "improvement", "defender", "study_period_years"});
   replacement::Case input{};
   input.rates = tax::Rates::make(root.number("marr"), root.number("income_tax_rate"),
                                  root.optional_number("after_tax_marr"),
                                  root.optional_number("capital_gains_tax_rate"));
-  input.challenger = read_challenger(root.object("challenger"));
+  if (root.has("challengers")) {
+    if (root.has("challenger")) {
+      throw InputError(root.path_of("challengers"),
+                       "give either challenger or challengers, not both");
+    }
+    input.challengers = read_challengers(root);
+  } else {
+    input.challenger = read_challenger(root.object("challenger"));
+  }
+  input.improvement = root.optional_number("improvement").value_or(0);
+  replacement::validate_improvement(input.improvement, root.path_of("improvement"));
   if (const auto defender = root.optional_object("defender")) {
     input.defender = read_defender(*defender);
   }
@@ -137,6 +180,11 @@ json case_result_to_json(const replacement::Case& input, const replacement::Case
                 {"after_tax_marr", rates.after_tax_marr},
                 {"capital_gains_tax_rate", rates.capital_gains_tax_rate}}},
               {"challenger", asset_analysis_to_json(result.challenger, "esl_years")}};
+  if (!result.challengers.empty()) {
+    out["challengers"] = challengers_to_json(input.challengers, result);
+    out["chosen_challenger"] = input.challengers[result.chosen].name;
+  }
+  if (input.improvement > 0) out["improvement"] = input.improvement;
   if (result.defender) {
     json defender = asset_analysis_to_json(*result.defender, "best_years");
     defender["opportunity_cost"] = opportunity_cost_to_json(result.defender->table.start);

@@ -7,6 +7,7 @@
 #include "formats/case_json.h"
 #include "formats/at_stake_output.h"
 #include "formats/caution.h"
+#include "formats/challengers_output.h"
 #include "formats/text_table.h"
 #include "review/verdict_reasons.h"
 
@@ -33,10 +34,15 @@ std::string decision_text(const replacement::Decision& decision,
         {std::to_string(k), marked(decision.timing.present_worth[k],
                                    static_cast<Years>(k) == decision.timing.keep_years)});
   }
+  const std::string chain =
+      decision.challenger_euac_by_year.empty()
+          ? fmt::format("the challenger repeated at its least EUAC {}",
+                        money(decision.challenger_euac))
+          : std::string("the challenger bought after k years at its least EUAC C*_k");
   return fmt::format(
-      "Replacement timing ({} basis; the challenger repeated at its least EUAC {}; * = best)\n"
+      "Replacement timing ({} basis; {}; * = best)\n"
       "{}\nDecision: {}\n  {}\n\nWhat is at stake ({} basis, present worth now)\n{}",
-      basis_words(decision.basis), money(decision.challenger_euac), timing.render(),
+      basis_words(decision.basis), chain, timing.render(),
       review::verdict_headline(finding), finding.reason, basis_words(decision.basis),
       at_stake_table(case_verdict.at_stake));
 }
@@ -60,10 +66,17 @@ std::string case_result_to_table(const replacement::Case& input,
   std::vector<std::string> sections;
   sections.push_back(rates_table(rates));
   sections.push_back(fmt::format("Decision basis: {}", basis_words(result.basis)) + "\n");
-  sections.push_back(
-      "Challenger: EUAC and marginal cost by years kept (* = economic service life)\n" +
-      life_curve_table(result.challenger));
-  sections.push_back(cash_flow_tables("Challenger", result.challenger.table));
+  if (!result.challengers.empty()) {
+    sections.push_back(challengers_table(input.challengers, result));
+  }
+  const std::string challenger =
+      result.challengers.empty()
+          ? std::string("Challenger")
+          : fmt::format("Challenger '{}'", input.challengers[result.chosen].name);
+  sections.push_back(challenger + (result.challengers.empty() ? "" : " (chosen)") +
+                     ": EUAC and marginal cost by years kept (* = economic service life)\n" +
+                     life_curve_table(result.challenger));
+  sections.push_back(cash_flow_tables(challenger, result.challenger.table));
   if (result.defender) {
     sections.push_back("Defender: its opportunity cost\n" +
                        opportunity_cost_table(result.defender->table.start));
@@ -71,6 +84,9 @@ std::string case_result_to_table(const replacement::Case& input,
         "Defender: EUAC and marginal cost by more years kept (* = best remaining life)\n" +
         life_curve_table(*result.defender));
     sections.push_back(cash_flow_tables("Defender", result.defender->table));
+  }
+  if (result.decision && !result.decision->challenger_euac_by_year.empty()) {
+    sections.push_back(challenger_by_year_table(*result.decision));
   }
   if (result.decision) {
     sections.push_back(decision_text(*result.decision, review::case_verdict(input, result)));

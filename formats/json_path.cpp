@@ -129,6 +129,15 @@ std::string JsonObject::string(std::string_view key) const {
   return value.get<std::string>();
 }
 
+std::vector<JsonObject> JsonObject::objects(std::string_view key) const {
+  const nlohmann::json& value = require(key, "array of objects");
+  const std::string path = path_of(key);
+  if (!value.is_array()) throw InputError(path, "expected an array of objects");
+  std::vector<JsonObject> result;
+  for (std::size_t i = 0; i < value.size(); ++i) result.emplace_back(value[i], index_path(path, i));
+  return result;
+}
+
 std::vector<double> JsonObject::numbers(std::string_view key) const {
   const nlohmann::json& value = require(key, "array of numbers");
   const std::string path = path_of(key);

@@ -70,6 +70,8 @@ class JsonObject {
   std::vector<double> numbers(std::string_view key) const;
   JsonObject object(std::string_view key) const;
   std::optional<JsonObject> optional_object(std::string_view key) const;
+  // An array of objects (possibly empty), each with its path ("$.challengers[1]").
+  std::vector<JsonObject> objects(std::string_view key) const;
 
  private:
   const nlohmann::json* find(std::string_view key) const;

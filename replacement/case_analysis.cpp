@@ -2,7 +2,10 @@
 // (see case_analysis.h).
 #include "replacement/case_analysis.h"
 
+#include <fmt/format.h>
+
 #include "core/errors.h"
+#include "replacement/challengers.h"
 
 namespace tenure::replacement {
 
@@ -24,7 +27,7 @@ AssetAnalysis analyse_asset(const Ownership& asset, const tax::Rates& rates) {
 }
 
 Decision decide(const AssetAnalysis& defender, const AssetAnalysis& challenger,
-                const tax::Rates& rates) {
+                const tax::Rates& rates, const ImprovedChallengers* later) {
   Decision d{};
   d.basis = rates.after_tax() ? Basis::after_tax : Basis::before_tax;
   const BasisAnalysis& def = defender.on(d.basis);
@@ -33,23 +36,75 @@ Decision decide(const AssetAnalysis& defender, const AssetAnalysis& challenger,
   d.challenger_esl = ch.curve.best_years;
   d.defender_euac = def.curve.best_euac;
   d.defender_best_years = def.curve.best_years;
-  d.timing = optimal_replacement(def.costs, d.challenger_euac);
+  if (later) {
+    const auto years = static_cast<std::size_t>(def.costs.max_years()) + 1;
+    if (later->least_euac.size() < years) {
+      throw RuntimeFailure("the improved challengers do not cover the defender's years");
+    }
+    d.challenger_euac_by_year.assign(later->least_euac.begin(), later->least_euac.begin() + years);
+    d.challenger_esl_by_year.assign(later->esl_years.begin(), later->esl_years.begin() + years);
+    d.timing = optimal_replacement(def.costs, d.challenger_euac_by_year);
+  } else {
+    d.timing = optimal_replacement(def.costs, d.challenger_euac);
+  }
   return d;
 }
 
+const Ownership& chosen_challenger(const Case& input, const CaseResult& result) {
+  return input.challengers.empty() ? input.challenger : input.challengers[result.chosen].asset;
+}
+
+namespace {
+
+void validate_challenger(const Ownership& challenger, const std::string& where) {
+  validate(challenger, where);
+  if (challenger.age_years != 0) {
+    throw InputError(where + ".age_years", "a challenger is new: age must be 0");
+  }
+}
+
+// Every challenger of the several-challengers form analysed, in the order given.
+std::vector<AssetAnalysis> analyse_challengers(const Case& input) {
+  std::vector<std::string> names;
+  for (const NamedChallenger& c : input.challengers) names.push_back(c.name);
+  validate_challenger_names(names, "$.challengers");
+  for (std::size_t i = 0; i < input.challengers.size(); ++i) {
+    validate_challenger(input.challengers[i].asset, fmt::format("$.challengers[{}]", i));
+  }
+  std::vector<AssetAnalysis> analysed;
+  for (const NamedChallenger& c : input.challengers) {
+    analysed.push_back(analyse_asset(c.asset, input.rates));
+  }
+  return analysed;
+}
+
+}  // namespace
+
 CaseResult analyse(const Case& input) {
-  validate(input.challenger, "$.challenger");
-  if (input.challenger.age_years != 0) {
-    throw InputError("$.challenger.age_years", "a challenger is new: age must be 0");
+  const tax::Rates& rates = input.rates;
+  const Basis basis = rates.after_tax() ? Basis::after_tax : Basis::before_tax;
+  validate_improvement(input.improvement, "$.improvement");
+  std::vector<AssetAnalysis> several;
+  std::size_t chosen = 0;
+  if (input.challengers.empty()) {
+    validate_challenger(input.challenger, "$.challenger");
+  } else {
+    several = analyse_challengers(input);
+    chosen = best_challenger(several, basis);
   }
   if (input.defender) validate(*input.defender, "$.defender");
-  const tax::Rates& rates = input.rates;
-  CaseResult result{rates.after_tax() ? Basis::after_tax : Basis::before_tax,
-                    analyse_asset(input.challenger, rates), std::nullopt, std::nullopt,
-                    std::nullopt};
+  AssetAnalysis challenger =
+      several.empty() ? analyse_asset(input.challenger, rates) : several[chosen];
+  CaseResult result{basis,        std::move(challenger), std::nullopt, std::nullopt,
+                    std::nullopt, std::move(several),    chosen};
   if (input.defender) {
     result.defender = analyse_asset(*input.defender, rates);
-    result.decision = decide(*result.defender, result.challenger, rates);
+    std::optional<ImprovedChallengers> later;
+    if (input.improvement > 0) {
+      later = improved_least_euacs(chosen_challenger(input, result), rates, basis,
+                                   input.improvement, result.defender->before_tax.costs.max_years());
+    }
+    result.decision = decide(*result.defender, result.challenger, rates, later ? &*later : nullptr);
   }
   if (input.study_period_years) {
     const KeepingCosts* defender =

@@ -5,6 +5,7 @@
 //   t.keep_years;   // k*; 0 means replace now
 #pragma once
 
+#include <span>
 #include <vector>
 
 #include "core/types.h"
@@ -18,5 +19,10 @@ struct Timing {
 };
 
 Timing optimal_replacement(const KeepingCosts& defender, Money challenger_least_euac);
+
+// With technology that improves (SPEC 14): T(k) = PWcost(k) + (P/F, i, k) C*_k / i, where
+// least_euac_by_year[k] = C*_k is the least EUAC of the challenger bought k years from now;
+// it must hold at least defender.max_years() + 1 values.
+Timing optimal_replacement(const KeepingCosts& defender, std::span<const Money> least_euac_by_year);
 
 }  // namespace tenure::replacement

@@ -15,6 +15,8 @@ AtStake at_stake(const replacement::Decision& d, const replacement::AssetAnalysi
   out.delay_cost = s.delay_cost;
   out.early_cost = s.early_cost;
   out.repair_limit = s.repair_limit;
+  out.improving = !d.challenger_euac_by_year.empty();
+  if (out.improving) return out;  // rule (2)
   if (const auto price = replacement::break_even_price(challenger_price_lines, d.defender_euac)) {
     out.break_even_price = price->value;
     out.break_even_price_life = static_cast<Years>(price->line + 1);

@@ -11,6 +11,10 @@
 // Rule (cited by the code):
 //   (1) close_call: the break-even price lies within review_margin of the challenger's price,
 //       |P_be / P - 1| <= review_margin; false when there is no break-even price.
+//   (2) With improving challengers (SPEC 14: the decision weighs C*_k by year) there is no
+//       break-even price or cost factor: their exact lines assume the challenger bought at any
+//       time is today's (k* = 0 exactly when C* <= D* holds only then). The stakes of the timing
+//       (delay, early, repair limit) read T(k) and stand.
 #pragma once
 
 #include <optional>
@@ -31,6 +35,7 @@ struct AtStake {
   std::optional<Money> break_even_price;
   std::optional<double> break_even_cost_factor;
   bool close_call = false;  // rule (1)
+  bool improving = false;   // rule (2): the challengers improve, so no break-evens are given
   // Where the break-evens come from, for explain: the challenger life n and the years kept k
   // whose lines give them (replacement/break_even.h).
   std::optional<Years> break_even_price_life;

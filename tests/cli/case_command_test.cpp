@@ -19,7 +19,8 @@ using testing::run_tenure;
 using testing::TempDir;
 
 const char* const kFixtures[] = {"delivery_van.json", "standby_generator.json",
-                                 "forklift_before_tax.json", "haul_truck_cca.json"};
+                                 "forklift_before_tax.json", "haul_truck_cca.json",
+                                 "delivery_van_choices.json"};
 
 // What the library makes of the file, written as every command writes JSON, to compare the
 // process's output with.
@@ -59,6 +60,12 @@ TEST(CaseCommand, FixturesCoverTheirDesign) {
       formats::read_case(testing::slurp(fixture("haul_truck_cca.json")));
   EXPECT_EQ(pooled.challenger.depreciation->name(), "pool");
   EXPECT_EQ(pooled.defender->depreciation->name(), "pool");
+  // delivery_van_choices: three challengers (SPEC 14), the dearer electric van cheapest to own
+  // (the figures are this file's own, invented), technology improving 2% a year.
+  const nlohmann::json choices = expected_json(fixture("delivery_van_choices.json"));
+  EXPECT_EQ(choices["challengers"].size(), 3u);
+  EXPECT_EQ(choices["chosen_challenger"], "electric");
+  EXPECT_EQ(choices["decision"]["challenger_by_year"].size(), 5u);
   for (const char* name : kFixtures) {
     EXPECT_EQ(
         testing::slurp(fixture(name)).rfind("// Invented example for tenure; not real data.\n", 0),
@@ -100,7 +107,7 @@ TEST(CaseCommand, BadFilesExitWithTwoAndOneLine) {
   expect_bad_file(R"({"marr": 0.1, "income_tax_rate": 0.25, "colour": 1, )" + kChallenger + "}",
                   "tenure case: $.colour: unknown key (expected one of marr, income_tax_rate, "
                   "after_tax_marr, capital_gains_tax_rate, lead_time_years, review_margin, "
-                  "challenger, defender, study_period_years)");
+                  "challenger, challengers, improvement, defender, study_period_years)");
   expect_bad_file(R"({"marr": 0.1, "income_tax_rate": 1.0, )" + kChallenger + "}",
                   "tenure case: $.income_tax_rate: must be in [0, 0.99]");
   expect_bad_file(R"({"marr": 1e999, "income_tax_rate": 0, )" + kChallenger + "}",

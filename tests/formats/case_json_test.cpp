@@ -46,8 +46,8 @@ TEST(ReadCase, EveryBadInputNamesItsPathAndRule) {
       // Unknown keys at each level.
       {"top-level typo", [](json& c) { c["mar"] = 0.1; },
        "$.mar|unknown key (expected one of marr, income_tax_rate, after_tax_marr, "
-       "capital_gains_tax_rate, lead_time_years, review_margin, challenger, defender, "
-       "study_period_years)"},
+       "capital_gains_tax_rate, lead_time_years, review_margin, challenger, challengers, "
+       "improvement, defender, study_period_years)"},
       {"challenger typo", [](json& c) { c["challenger"]["foo"] = 1; },
        "$.challenger.foo|unknown key (expected one of first_cost, operating_costs, "
        "market_values, depreciation)"},

@@ -267,12 +267,12 @@ TEST(CaseRefusals, WhatTheCaseTestsLeaveOut) {
   const std::vector<BadPolicy> cases = {
       {"cost model is a policy key", [](json& c) { c["cost_model"] = "auto"; },
        "$.cost_model|unknown key (expected one of marr, income_tax_rate, after_tax_marr, "
-       "capital_gains_tax_rate, lead_time_years, review_margin, challenger, defender, "
-       "study_period_years)"},
+       "capital_gains_tax_rate, lead_time_years, review_margin, challenger, challengers, "
+       "improvement, defender, study_period_years)"},
       {"sources are a policy key", [](json& c) { c["sources"] = json::object(); },
        "$.sources|unknown key (expected one of marr, income_tax_rate, after_tax_marr, "
-       "capital_gains_tax_rate, lead_time_years, review_margin, challenger, defender, "
-       "study_period_years)"},
+       "capital_gains_tax_rate, lead_time_years, review_margin, challenger, challengers, "
+       "improvement, defender, study_period_years)"},
       {"switch as text", [](json& c) { c["challenger"]["depreciation"]["switch_to_straight_line"] = "yes"; },
        "$.challenger.depreciation.switch_to_straight_line|expected true or false"},
       {"method as number", [](json& c) { c["challenger"]["depreciation"]["method"] = 1; },
