@@ -40,10 +40,12 @@ std::string decision_text(const replacement::Decision& decision,
                         money(decision.challenger_euac))
           : std::string("the challenger bought after k years at its least EUAC C*_k");
   return fmt::format(
-      "Replacement timing ({} basis; {}; * = best)\n"
-      "{}\nDecision: {}\n  {}\n\nWhat is at stake ({} basis, present worth now)\n{}",
-      basis_words(decision.basis), chain, timing.render(),
-      review::verdict_headline(finding), finding.reason, basis_words(decision.basis),
+      "{}{}\nDecision: {}\n{}\nWhat is at stake ({} basis, present worth now)\n{}",
+      wrap_words(fmt::format("Replacement timing ({} basis; * = best; {})",
+                             basis_words(decision.basis), chain),
+                 kLineWidth, "", "  "),
+      timing.render(), review::verdict_headline(finding),
+      wrap_words(finding.reason, kLineWidth, "  ", "  "), basis_words(decision.basis),
       at_stake_table(case_verdict.at_stake));
 }
 

@@ -4,6 +4,8 @@
 #include <gtest/gtest.h>
 
 #include <nlohmann/json.hpp>
+#include <sstream>
+#include <string>
 
 #include "cli/input_file.h"
 #include "formats/case_json.h"
@@ -80,6 +82,19 @@ TEST(CaseCommand, TextIsTheDefaultAndEndsWithTheCaution) {
   const replacement::Case input = formats::read_case(testing::slurp(fixture("delivery_van.json")));
   EXPECT_EQ(run.out, formats::case_result_to_table(input, replacement::analyse(input)));
   EXPECT_NE(run.out.find("Caution: "), std::string::npos);
+}
+
+// Text is read in a terminal or a log: no line of any fixture's text is wider than 100 columns
+// (the tables wrap their last text column, sentences wrap at spaces).
+TEST(CaseCommand, TextLinesAreAtMostOneHundredColumns) {
+  for (const char* name : kFixtures) {
+    const testing::Run run = run_tenure({"case", fixture(name)});
+    ASSERT_EQ(run.exit_code, 0) << name << ": " << run.err;
+    std::istringstream lines(run.out);
+    for (std::string line; std::getline(lines, line);) {
+      EXPECT_LE(line.size(), 100u) << name << ": " << line;
+    }
+  }
 }
 
 TEST(CaseCommand, DashReadsStandardInput) {
