@@ -130,6 +130,7 @@ void drop_analysis(AssetReview& r) {
   r.defender_euac_after_tax.reset();
   r.marginal_cost_next_year.reset();
   r.class_esl_years.reset();
+  r.challenger.clear();
 }
 
 }  // namespace
@@ -159,6 +160,7 @@ AssetReview judge(std::size_t asset, DefenderInputs inputs, const ClassModel& mo
   const replacement::BasisAnalysis& on_basis = r.defender->on(r.basis);
   r.marginal_cost_next_year = on_basis.curve.marginal_costs[0];
   r.class_esl_years = d.challenger_esl;
+  r.challenger = model.chosen_name;
   r.finding = weigh(figures_of(d, *r.marginal_cost_next_year, on_basis.costs.max_years()),
                     r.inputs.age_years, policy.lead_time_years);
   r.at_stake = at_stake(d, *r.defender, r.inputs.ownership, model.price_lines,

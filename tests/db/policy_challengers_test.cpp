@@ -32,14 +32,16 @@ demo::Options small_fleet() {
   return options;
 }
 
-// Every row a run stored in `table`, each value's type and text, all columns but run_id.
+// Every row a run stored in `table`, each value's type and text, all columns but run_id and the
+// chosen challenger's name (checked on its own).
 std::string run_rows(Connection& db, const std::string& table, std::int64_t run_id) {
   Statement q(db, "SELECT * FROM " + table + " WHERE run_id = ?1 ORDER BY 2");
   q.bind(1, run_id);
   std::string all;
   while (q.step()) {
     for (int c = 0; c < sqlite3_column_count(q.handle()); ++c) {
-      if (std::string(sqlite3_column_name(q.handle(), c)) == "run_id") continue;
+      const std::string name = sqlite3_column_name(q.handle(), c);
+      if (name == "run_id" || name == "challenger") continue;
       all += std::string(sqlite3_column_name(q.handle(), c)) + "=" +
              std::to_string(q.column_type(c)) + ":" + std::string(q.text(c)) + "|";
     }
@@ -95,6 +97,11 @@ TEST_F(PolicyChallengers, OneElementListStoresTheSameFiguresAsTheOneChallengerFo
     EXPECT_GT(stored.size(), 1000u) << table;  // the demo run stored its rows
     EXPECT_EQ(run_rows(db, table, listed), stored) << table;
   }
+  EXPECT_EQ(testing_support::scalar(db, "SELECT count(*) FROM tenure_asset_result WHERE run_id = " +
+                                            std::to_string(listed) +
+                                            " AND challenger_euac IS NOT NULL AND challenger IS "
+                                            "NOT 'standard'"),
+            0);
 }
 
 TEST_F(PolicyChallengers, DearerToRunIsNeverChosenAndCheaperToRunIs) {
@@ -114,6 +121,19 @@ TEST_F(PolicyChallengers, DearerToRunIsNeverChosenAndCheaperToRunIs) {
     return json::array({{{"name", "standard"}, {"first_cost", price}},
                         {{"name", "frugal"}, {"first_cost", price}, {"cost_factor", 0.6}}});
   }));
+  // The chosen one is named per asset, in the table and in the latest view (db/schema.cpp).
+  EXPECT_EQ(testing_support::scalar(db, "SELECT count(*) FROM tenure_asset_result WHERE run_id = " +
+                                            std::to_string(frugal) +
+                                            " AND challenger_euac IS NOT NULL AND "
+                                            "challenger IS NOT 'frugal'"),
+            0);
+  EXPECT_EQ(testing_support::scalar(db,
+                                    "SELECT count(*) FROM tenure_latest WHERE challenger = "
+                                    "'frugal'"),
+            static_cast<double>(standard.size()));
+  EXPECT_EQ(testing_support::scalar(db, "SELECT count(*) FROM tenure_asset_result WHERE run_id = " +
+                                            std::to_string(plain) + " AND challenger IS NOT NULL"),
+            0);
   const auto lower = per_asset(db, frugal, "challenger_euac");
   ASSERT_EQ(lower.size(), standard.size());
   for (const auto& [asset, euac] : standard) EXPECT_LT(lower.at(asset), euac) << asset;
