@@ -8,6 +8,7 @@
 #include "formats/depreciation_json.h"
 #include "formats/json_path.h"
 #include "formats/json_text.h"
+#include "replacement/challengers.h"
 
 namespace tenure::formats {
 namespace {
@@ -35,22 +36,71 @@ review::Sources read_sources(const JsonObject& sources) {
           identifier(sources, "valuations", defaults.valuations)};
 }
 
+// A market_value object's annual_decline, in [0, 1).
+Rate read_annual_decline(const JsonObject& value) {
+  value.allow_only({"annual_decline"});
+  const Rate decline = value.number("annual_decline");
+  if (decline < 0 || decline >= 1) {
+    throw InputError(value.path_of("annual_decline"), "must be in [0, 1)");
+  }
+  return decline;
+}
+
+Money read_price(const JsonObject& c, std::string_view key) {
+  const Money price = c.number(key);
+  require_positive(price, c.path_of(key));
+  require_amount(price, c.path_of(key));
+  return price;
+}
+
+// One of the several-challengers form (SPEC 14); its depreciation, when given, is checked on
+// its own price.
+review::ChallengerPolicy read_challenger(const JsonObject& c) {
+  c.allow_only({"name", "first_cost", "cost_factor", "depreciation", "market_value"});
+  review::ChallengerPolicy challenger{c.string("name"), read_price(c, "first_cost")};
+  challenger.cost_factor = c.optional_number("cost_factor").value_or(1);
+  require_positive(challenger.cost_factor, c.path_of("cost_factor"));
+  if (const auto spec = c.optional_object("depreciation")) {
+    challenger.depreciation = read_depreciation(*spec);
+    make_checked_method(*challenger.depreciation, challenger.first_cost, spec->path());
+  }
+  if (const auto value = c.optional_object("market_value")) {
+    challenger.annual_decline = read_annual_decline(*value);
+  }
+  return challenger;
+}
+
+std::vector<review::ChallengerPolicy> read_challengers(const JsonObject& c) {
+  std::vector<review::ChallengerPolicy> challengers;
+  std::vector<std::string> names;
+  for (const JsonObject& challenger : c.objects("challengers")) {
+    challengers.push_back(read_challenger(challenger));
+    names.push_back(challengers.back().name);
+  }
+  replacement::validate_challenger_names(names, c.path_of("challengers"));
+  return challengers;
+}
+
 review::ClassPolicy read_class(const JsonObject& c) {
-  c.allow_only({"challenger_first_cost", "max_life_years", "depreciation", "market_value",
-                "cost_model"});
+  c.allow_only({"challenger_first_cost", "challengers", "improvement", "max_life_years",
+                "depreciation", "market_value", "cost_model"});
   review::ClassPolicy policy{};
-  policy.challenger_first_cost = c.number("challenger_first_cost");
-  require_positive(policy.challenger_first_cost, c.path_of("challenger_first_cost"));
-  require_amount(policy.challenger_first_cost, c.path_of("challenger_first_cost"));
+  if (c.has("challengers")) {
+    if (c.has("challenger_first_cost")) {
+      throw InputError(c.path_of("challengers"),
+                       "give either challenger_first_cost or challengers, not both");
+    }
+    policy.challengers = read_challengers(c);
+    policy.challenger_first_cost = policy.challengers.front().first_cost;
+  } else {
+    policy.challenger_first_cost = read_price(c, "challenger_first_cost");
+  }
+  policy.improvement = c.optional_number("improvement").value_or(0);
+  replacement::validate_improvement(policy.improvement, c.path_of("improvement"));
   policy.max_life_years = c.whole_number("max_life_years", 1, kMaxLifeYears);
   policy.depreciation = read_depreciation(c.object("depreciation"));
   make_checked_method(policy.depreciation, policy.challenger_first_cost, c.path_of("depreciation"));
-  const JsonObject value = c.object("market_value");
-  value.allow_only({"annual_decline"});
-  policy.annual_decline = value.number("annual_decline");
-  if (policy.annual_decline < 0 || policy.annual_decline >= 1) {
-    throw InputError(value.path_of("annual_decline"), "must be in [0, 1)");
-  }
+  policy.annual_decline = read_annual_decline(c.object("market_value"));
   policy.cost_model = fleet::CostModelChoice::automatic;
   if (c.has("cost_model")) {
     const std::string model = c.string("cost_model");

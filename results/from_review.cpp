@@ -77,6 +77,7 @@ AssetRow asset_row(const review::AssetReview& r, const review::AssetRecord& reco
     row.defender_euac_after_tax = r.defender_euac_after_tax;
     row.marginal_cost_next_year = r.marginal_cost_next_year;
     row.replace_after_years = d.timing.keep_years;
+    if (!r.challenger.empty()) row.challenger = r.challenger;
   }
   if (r.at_stake) {
     const review::AtStake& s = *r.at_stake;

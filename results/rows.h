@@ -117,6 +117,8 @@ struct AssetRow {
   std::optional<Money> break_even_price;
   std::optional<double> break_even_cost_factor;
   std::optional<bool> close_call;
+  // The several-challengers form (SPEC 14): the class challenger its verdict weighs.
+  std::optional<std::string> challenger;
 
   bool due() const { return verdict != review::Verdict::keep; }
 };

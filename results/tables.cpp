@@ -109,6 +109,11 @@ constexpr Column<AssetRow> kAssetColumns[] = {
                                               {.since = 2, .in_views = true}),
     column<&AssetRow::close_call>("close_call", "INTEGER CHECK (close_call IN (0, 1))",
                                   {.since = 2, .in_views = true}),
+    column<&AssetRow::challenger>(
+        "challenger", "TEXT",
+        {.note = "the class challenger weighed, by name; NULL in the one-challenger form",
+         .since = 3,
+         .in_views = true}),
 };
 
 constexpr Column<CurveRow> kCurveColumns[] = {

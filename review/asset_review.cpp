@@ -130,6 +130,7 @@ void drop_analysis(AssetReview& r) {
   r.defender_euac_after_tax.reset();
   r.marginal_cost_next_year.reset();
   r.class_esl_years.reset();
+  r.challenger.clear();
 }
 
 }  // namespace
@@ -151,17 +152,19 @@ AssetReview judge(std::size_t asset, DefenderInputs inputs, const ClassModel& mo
   r.defender = std::make_unique<replacement::AssetAnalysis>(
       replacement::analyse_asset(r.inputs.ownership, rates));
   r.book_value_now = r.defender->table.start.book_value;
-  r.decision = replacement::decide(*r.defender, *model.challenger, rates);
+  r.decision = replacement::decide(*r.defender, *model.challenger, rates,
+                                   model.later ? &*model.later : nullptr);
   const replacement::Decision& d = *r.decision;
   r.defender_euac_before_tax = r.defender->before_tax.curve.best_euac;
   if (r.defender->after_tax) r.defender_euac_after_tax = r.defender->after_tax->curve.best_euac;
   const replacement::BasisAnalysis& on_basis = r.defender->on(r.basis);
   r.marginal_cost_next_year = on_basis.curve.marginal_costs[0];
   r.class_esl_years = d.challenger_esl;
+  r.challenger = model.chosen_name;
   r.finding = weigh(figures_of(d, *r.marginal_cost_next_year, on_basis.costs.max_years()),
                     r.inputs.age_years, policy.lead_time_years);
   r.at_stake = at_stake(d, *r.defender, r.inputs.ownership, model.price_lines,
-                        model.policy->challenger_first_cost, rates, policy.review_margin);
+                        model.challenger_price, rates, policy.review_margin);
   if (const auto figure = first_non_finite(r)) {  // rule (0): never stored
     drop_analysis(r);
     if (!std::isfinite(r.book_value_now)) r.book_value_now = 0;

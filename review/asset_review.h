@@ -48,6 +48,7 @@ struct AssetReview {
   std::optional<replacement::Decision> decision;
   std::optional<AtStake> at_stake;       // present with a decision
   std::optional<Years> class_esl_years;  // the class challenger's ESL on the basis
+  std::string challenger;  // the several-challengers form: the chosen one's name; else empty
 
   bool due() const { return finding.due(); }
 };

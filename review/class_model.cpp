@@ -24,7 +24,8 @@ Years economic_life(const replacement::Ownership& challenger, const tax::Rates& 
   return replacement::life_curve(costs).best_years;
 }
 
-// The bootstrap of esl_bootstrap.h on the members' cost years, drawn against the class curve.
+// The bootstrap of esl_bootstrap.h on the members' cost years, drawn against the class curve;
+// each refit's life is the chosen challenger's.
 std::optional<EslSpread> spread_of(const ClassModel& model, const FleetData& data,
                                    const std::vector<std::size_t>& members,
                                    const tax::Rates& rates) {
@@ -35,13 +36,24 @@ std::optional<EslSpread> spread_of(const ClassModel& model, const FleetData& dat
     assets.push_back({data.assets[index].asset_id,
                       fleet::curve_sums(*model.cost_curve, data.costs.year_costs(asset))});
   }
-  return bootstrap_esl(
-      model.asset_class, *model.cost_curve, std::move(assets),
-      [&](const fleet::CostCurve& refitted) {
-        return economic_life(
-            challenger_ownership(*model.policy, refitted, model.value_curve, model.depreciation),
-            rates);
-      });
+  const ClassChallenger chosen =
+      class_challengers(*model.policy, model.value_curve, model.depreciation)[model.chosen];
+  return bootstrap_esl(model.asset_class, *model.cost_curve, std::move(assets),
+                       [&](const fleet::CostCurve& refitted) {
+                         return economic_life(
+                             challenger_ownership(chosen, refitted, model.policy->max_life_years),
+                             rates);
+                       });
+}
+
+ChallengerFigures figures_of(const std::string& name, const replacement::AssetAnalysis& a) {
+  ChallengerFigures f{name, a.before_tax.curve.best_years, a.before_tax.curve.best_euac,
+                      std::nullopt, std::nullopt};
+  if (a.after_tax) {
+    f.esl_after_tax = a.after_tax->curve.best_years;
+    f.euac_after_tax = a.after_tax->curve.best_euac;
+  }
+  return f;
 }
 
 bool all_finite(const replacement::AssetAnalysis& a) {
@@ -61,19 +73,33 @@ Money ClassModel::cost_at(Years age_year, double factor) const {
   return std::max(0.0, cost_curve->predict(age_year) * factor);
 }
 
-replacement::Ownership challenger_ownership(
-    const ClassPolicy& policy, const fleet::CostCurve& cost_curve,
-    const fleet::ValueCurve& value_curve,
-    std::shared_ptr<const depreciation::Method> depreciation) {
-  replacement::Ownership challenger;
-  challenger.first_cost = policy.challenger_first_cost;
-  challenger.age_years = 0;
-  challenger.value_now = policy.challenger_first_cost;
-  for (Years k = 1; k <= policy.max_life_years; ++k) {
-    challenger.operating_costs.push_back(std::max(0.0, cost_curve.predict(k)));
-    challenger.market_values.push_back(policy.challenger_first_cost * value_curve.fraction_at(k));
+std::vector<ClassChallenger> class_challengers(
+    const ClassPolicy& policy, const fleet::ValueCurve& value_curve,
+    const std::shared_ptr<const depreciation::Method>& depreciation) {
+  if (policy.challengers.empty()) {
+    return {{"", policy.challenger_first_cost, 1.0, value_curve, depreciation}};
   }
-  challenger.depreciation = std::move(depreciation);
+  std::vector<ClassChallenger> out;
+  for (const ChallengerPolicy& c : policy.challengers) {
+    out.push_back({c.name, c.first_cost, c.cost_factor,
+                   c.annual_decline ? fleet::policy_value_curve(*c.annual_decline) : value_curve,
+                   c.depreciation ? depreciation::make_method(*c.depreciation) : depreciation});
+  }
+  return out;
+}
+
+replacement::Ownership challenger_ownership(const ClassChallenger& c,
+                                            const fleet::CostCurve& cost_curve,
+                                            Years max_life_years) {
+  replacement::Ownership challenger;
+  challenger.first_cost = c.first_cost;
+  challenger.age_years = 0;
+  challenger.value_now = c.first_cost;
+  for (Years k = 1; k <= max_life_years; ++k) {
+    challenger.operating_costs.push_back(std::max(0.0, cost_curve.predict(k) * c.cost_factor));
+    challenger.market_values.push_back(c.first_cost * c.value_curve.fraction_at(k));
+  }
+  challenger.depreciation = c.depreciation;
   return challenger;
 }
 
@@ -88,19 +114,14 @@ ClassModel make_class_model(const std::string& asset_class, const ClassPolicy& p
                    std::move(cost_curve),
                    std::move(value_curve),
                    std::nullopt,
-                   std::nullopt,
-                   {},
-                   std::nullopt,
-                   std::nullopt,
-                   {}};
+                   std::nullopt};
+  model.challenger_price = policy.challenger_first_cost;
   if (!model.cost_curve) {
     model.note = fmt::format("no complete year of cost history for class '{}', so its costs "
                              "cannot be estimated until it has one",
                              asset_class);
     return model;
   }
-  replacement::Ownership challenger =
-      challenger_ownership(policy, *model.cost_curve, model.value_curve, model.depreciation);
   bool clamped = false;
   for (Years k = 1; k <= policy.max_life_years; ++k) {
     clamped = clamped || model.cost_curve->predict(k) < 0;
@@ -110,19 +131,38 @@ ClassModel make_class_model(const std::string& asset_class, const ClassPolicy& p
                  "those years are read as zero cost";
   }
   const replacement::Basis basis = decision_basis(rates);
-  model.challenger = replacement::analyse_asset(challenger, rates);
-  if (!all_finite(*model.challenger)) {
-    // Its assets then cannot be weighed (verdict_rule.h rule (0)); no figure is stored.
-    model.challenger.reset();
-    model.note = fmt::format("the challenger's figures for class '{}' overflow (they are not "
-                             "finite numbers): its cost curve grows too fast over "
-                             "max_life_years {}",
-                             asset_class, policy.max_life_years);
-    return model;
+  // Each challenger's ESL and least EUAC once for the class (SPEC 14); the best on the basis.
+  const std::vector<ClassChallenger> listed =
+      class_challengers(policy, model.value_curve, model.depreciation);
+  std::vector<replacement::Ownership> inputs;
+  std::vector<replacement::AssetAnalysis> analysed;
+  for (const ClassChallenger& c : listed) {
+    inputs.push_back(challenger_ownership(c, *model.cost_curve, policy.max_life_years));
+    analysed.push_back(replacement::analyse_asset(inputs.back(), rates));
+    if (!all_finite(analysed.back())) {
+      // Its assets then cannot be weighed (verdict_rule.h rule (0)); no figure is stored.
+      model.note = fmt::format("the challenger's figures for class '{}' overflow (they are not "
+                               "finite numbers): its cost curve grows too fast over "
+                               "max_life_years {}",
+                               asset_class, policy.max_life_years);
+      return model;
+    }
   }
-  model.price_lines = replacement::price_lines(challenger, *model.challenger, rates, basis);
+  model.chosen = replacement::best_challenger(analysed, basis);
+  for (std::size_t i = 0; i < listed.size(); ++i) {
+    model.challengers_weighed.push_back(figures_of(listed[i].name, analysed[i]));
+  }
+  model.chosen_name = listed[model.chosen].name;
+  model.challenger_price = listed[model.chosen].first_cost;
+  replacement::Ownership& chosen = inputs[model.chosen];
+  model.challenger = std::move(analysed[model.chosen]);
+  if (policy.improvement > 0) {
+    model.later = replacement::improved_least_euacs(chosen, rates, basis, policy.improvement,
+                                                    policy.max_life_years);
+  }
+  model.price_lines = replacement::price_lines(chosen, *model.challenger, rates, basis);
   model.band = esl_band(model.challenger->on(basis).curve.euac, band_width);
-  model.challenger_input = std::move(challenger);
+  model.challenger_input = std::move(chosen);
   return model;
 }
 

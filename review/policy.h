@@ -9,6 +9,7 @@
 #include <map>
 #include <optional>
 #include <string>
+#include <vector>
 
 #include "core/types.h"
 #include "depreciation/method.h"
@@ -17,12 +18,27 @@
 
 namespace tenure::review {
 
+// One of a class's several challengers (SPEC 14): a named new unit on the class cost curve.
+struct ChallengerPolicy {
+  std::string name;
+  Money first_cost;        // its installed cost, > 0
+  double cost_factor = 1;  // its operating cost of age-year k: the class curve's times this, > 0
+  std::optional<depreciation::Spec> depreciation = std::nullopt;  // else the class's
+  // Its value curve: value_start 1 and this decline; else the class's value curve.
+  std::optional<Rate> annual_decline = std::nullopt;
+};
+
 struct ClassPolicy {
-  Money challenger_first_cost;         // a new unit's installed cost, > 0
+  // A new unit's installed cost, > 0; in the several-challengers form the first listed one's.
+  Money challenger_first_cost;
   Years max_life_years;                // longest life weighed, >= 1
   depreciation::Spec depreciation;     // applied to each asset's own first cost
   Rate annual_decline;                 // value-curve fallback where valuations are too few
   fleet::CostModelChoice cost_model;   // linear, geometric or automatic ("auto")
+  // The several-challengers form (SPEC 14); empty in the one-challenger form.
+  std::vector<ChallengerPolicy> challengers = {};
+  // g: a challenger bought k years from now costs (1 - g)^k times today's (SPEC 14), in [0, 1).
+  double improvement = 0;
 };
 
 // Names of the three input relations (tables or views); plain SQL identifiers only.

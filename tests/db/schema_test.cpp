@@ -70,7 +70,9 @@ const std::vector<std::string> kAssetResult = {"run_id INTEGER 1 1",
                                                "repair_limit REAL 0 0",
                                                "break_even_price REAL 0 0",
                                                "break_even_cost_factor REAL 0 0",
-                                               "close_call INTEGER 0 0"};
+                                               "close_call INTEGER 0 0",
+                                               // SPEC 14, from schema version 3:
+                                               "challenger TEXT 0 0"};
 
 const std::vector<std::string> kClassResult = {"run_id INTEGER 1 1",
                                                "asset_class TEXT 1 2",

@@ -51,8 +51,8 @@ const std::string kTopKeys =
     "capital_gains_tax_rate, cost_escalation, lead_time_years, review_margin, esl_band, "
     "sources, classes, detail)";
 const std::string kClassKeys =
-    "unknown key (expected one of challenger_first_cost, max_life_years, depreciation, "
-    "market_value, cost_model)";
+    "unknown key (expected one of challenger_first_cost, challengers, improvement, "
+    "max_life_years, depreciation, market_value, cost_model)";
 const std::string kSourceRule =
     "must be a plain SQL identifier (letters, digits and _, not starting with a digit); map "
     "other names with a CREATE VIEW";
