@@ -61,13 +61,14 @@ json class_json(const Explanation& e) {
             {"r2", k->r2},                    {"asset_years", c.asset_years}};
   }
   const fleet::ValueCurve& v = e.model.value_curve;
-  json challenger = {{"first_cost", p.challenger_first_cost},
+  json challenger = {{"first_cost", e.model.challenger_price},
                      {"max_life_years", p.max_life_years},
-                     {"depreciation", formats::depreciation_to_json(p.depreciation)},
+                     {"depreciation", formats::depreciation_to_json(e.model.challenger_depreciation())},
                      {"esl_years_before_tax", optional_value(c.esl_years_before_tax)},
                      {"euac_before_tax", optional_value(c.euac_before_tax)},
                      {"esl_years_after_tax", optional_value(c.esl_years_after_tax)},
                      {"euac_after_tax", optional_value(c.euac_after_tax)}};
+  if (!e.model.chosen_name.empty()) challenger["name"] = e.model.chosen_name;
   // The band recomputed from the rebuilt challenger; the percentiles only as stored (their
   // refits need every asset's cost years).
   json band = nullptr;

@@ -170,9 +170,14 @@ std::string class_curves(const Explanation& e) {
   t.add_row({"value fit", v.model == fleet::ValueModel::fitted
                               ? fmt::format("log-linear on {} valuations", v.valuations_used)
                               : "the policy's annual_decline (fewer than 3 usable valuations)"});
-  t.add_row({"challenger", fmt::format("a new unit at {}, kept 1..{} years, depreciation {}",
-                                       money(p.challenger_first_cost), p.max_life_years,
-                                       depreciation_words(p.depreciation))});
+  const std::string chosen =
+      e.model.chosen_name.empty()
+          ? std::string()
+          : fmt::format("'{}' (the best of the {} listed on the decision's basis): ",
+                        e.model.chosen_name, p.challengers.size());
+  t.add_row({"challenger", fmt::format("{}a new unit at {}, kept 1..{} years, depreciation {}",
+                                       chosen, money(e.model.challenger_price), p.max_life_years,
+                                       depreciation_words(e.model.challenger_depreciation()))});
   if (const auto& ch = e.model.challenger) {
     t.add_row({"economic life before tax", fmt::format("{}, least EUAC {}",
                                                        years(ch->before_tax.curve.best_years),

@@ -55,7 +55,7 @@ std::string at_stake(const Explanation& e) {
                    fmt::format("max(0, {} - {}){} = {}", money(t[0]), money(best_kept), deduction,
                                money(s.repair_limit)));
   }
-  const Money price = e.model.policy->challenger_first_cost;
+  const Money price = e.model.challenger_price;
   if (s.break_even_price && s.break_even_price_life) {
     const replacement::Line& line = e.model.price_lines[*s.break_even_price_life - 1];
     body += figure("break-even price", "max over n of (D* - beta_n) / alpha_n",

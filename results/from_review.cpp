@@ -19,7 +19,7 @@ ClassRow class_row(const review::ClassModel& m) {
   ClassRow row;
   row.asset_class = m.asset_class;
   row.assets = static_cast<std::int64_t>(m.assets);
-  row.challenger_first_cost = m.policy->challenger_first_cost;
+  row.challenger_first_cost = m.challenger_price;
   row.max_life_years = m.policy->max_life_years;
   if (m.challenger) {
     const replacement::LifeCurve& before = m.challenger->before_tax.curve;

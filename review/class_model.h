@@ -69,6 +69,12 @@ struct ClassModel {
   std::size_t chosen = 0;
   std::string chosen_name = {};  // empty in the one-challenger form
   Money challenger_price = 0;  // the chosen challenger's first cost
+  // The chosen challenger's depreciation: its own where it gives one, else the class's.
+  const depreciation::Spec& challenger_depreciation() const {
+    if (policy->challengers.empty()) return policy->depreciation;
+    const auto& own = policy->challengers[chosen].depreciation;
+    return own ? *own : policy->depreciation;
+  }
   // With improvement > 0: C*_k of the chosen challenger bought k = 0..max_life_years years from
   // now, computed once for all the class's assets.
   std::optional<replacement::ImprovedChallengers> later = std::nullopt;

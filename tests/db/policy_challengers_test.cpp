@@ -13,10 +13,13 @@
 #include <nlohmann/json.hpp>
 #include <string>
 
+#include "app/explain_run.h"
 #include "app/review_run.h"
 #include "db/demo_writer.h"
 #include "db_test_support.h"
 #include "demo/demo_policy.h"
+#include "core/money_text.h"
+#include "explain/explain_text.h"
 #include "formats/json_text.h"
 
 namespace tenure::db {
@@ -137,6 +140,50 @@ TEST_F(PolicyChallengers, DearerToRunIsNeverChosenAndCheaperToRunIs) {
   const auto lower = per_asset(db, frugal, "challenger_euac");
   ASSERT_EQ(lower.size(), standard.size());
   for (const auto& [asset, euac] : standard) EXPECT_LT(lower.at(asset), euac) << asset;
+}
+
+// The class result and explain give the chosen challenger's price, not the first listed one's,
+// and explain names the one chosen.
+TEST_F(PolicyChallengers, TheChosenChallengersPriceIsStoredAndExplained) {
+  const std::int64_t run = review(with_challengers([&](double price) {
+    return json::array({{{"name", "standard"}, {"first_cost", price}},
+                        {{"name", "frugal"}, {"first_cost", price * 1.1}, {"cost_factor", 0.5}}});
+  }));
+  const json policy = demo_policy();
+  Statement q(db,
+              "SELECT asset_class, challenger_first_cost FROM tenure_class_result WHERE run_id = "
+              "?1 AND euac_before_tax IS NOT NULL");
+  q.bind(1, run);
+  int classes = 0;
+  while (q.step()) {
+    const std::string asset_class(q.text(0));
+    const double price = policy["classes"][asset_class]["challenger_first_cost"];
+    EXPECT_DOUBLE_EQ(q.real(1), price * 1.1) << asset_class;
+    ++classes;
+  }
+  EXPECT_GT(classes, 2);
+  Statement first(db,
+                  "SELECT asset_id FROM tenure_asset_result WHERE run_id = ?1 AND challenger = "
+                  "'frugal' ORDER BY asset_id LIMIT 1");
+  first.bind(1, run);
+  ASSERT_TRUE(first.step());
+  const std::string asset(first.text(0));
+  Statement class_of(db, "SELECT asset_class FROM asset WHERE asset_id = ?1");
+  class_of.bind(1, asset);
+  ASSERT_TRUE(class_of.step());
+  const std::string asset_class(class_of.text(0));
+  const double price = policy["classes"][asset_class]["challenger_first_cost"];
+  // The table wraps its last column: compare with the spaces and line breaks collapsed.
+  std::string text;
+  for (const char c : explain::explanation_to_text(app::explain_stored_asset(db, asset, run))) {
+    const bool space = c == ' ' || c == '\n';
+    if (!space || (!text.empty() && text.back() != ' ')) text += space ? ' ' : c;
+  }
+  EXPECT_NE(text.find("challenger 'frugal' (the best of the 2 listed on the decision's basis): a "
+                      "new unit at " +
+                      money(price * 1.1) + ","),
+            std::string::npos)
+      << text;
 }
 
 TEST_F(PolicyChallengers, ImprovementZeroChangesNothingAndImprovementDelaysReplacements) {
